@@ -19,7 +19,7 @@ import java.util.Map;
  * <p>Provenance (see the shared note SAMPLING.md): Table 2-A is identical in ISO 2859-1:1999,
  * ANSI/ASQ Z1.4-2008 and MIL-STD-105E; Table 2-B is identical in all of them except cell A / AQL 10
  * (see {@link #TIGHTENED_ISO_A_10}); Table 2-C differs (ISO 1999 removed the gaps between Ac and Re).
- * The ISO 2-C values rest on a single transcription of the identical national adoption
+ * The ISO 2-C values rest on a single retyped copy of the identical national adoption
  * GB/T 2828.1-2012 and must be checked against a printed ISO 2859-1:1999 before release. For the Z1.4
  * reduced table, the placement of arrows versus plans in rows A–C (all n = 2) is inferred from the
  * table's diagonal pattern; the resolved plans are certain.
@@ -95,7 +95,7 @@ final class SamplingTables {
             """;
     /**
      * The one conflicting cell (SAMPLING.md section 4, open item 1): ISO 2859-1:1999 Table 2-B, code
-     * letter A, AQL 10 is "0 1" in the only ISO transcription available (GB/T 2828.1-2012), where the
+     * letter A, AQL 10 is "0 1" in the only ISO retyped copy available (GB/T 2828.1-2012), where the
      * Z1.4 / MIL-STD-105E Table II-B prints ↓ (resolving to D, n 8, 1/2). Dockgate follows each
      * scheme's own source; the ISO value must be checked against a printed ISO 2859-1:1999.
      */

@@ -196,7 +196,7 @@ public final class SingleSamplingPlans {
 
     /**
      * Follows the arrows of the printed table from (letter, aql). Package-private for the tests that
-     * compare every cell with the independent resolved transcription.
+     * compare every cell with the independent resolved copy in the test resources.
      */
     static Resolved resolve(Scheme scheme, Severity severity, CodeLetter letter, Aql aql) {
         SamplingTables.PrintedTable table = SamplingTables.table(scheme, severity);

@@ -177,9 +177,13 @@ public final class SwitchingRules {
                     + " needs ").append(missingConditions(lot)).append(" (").append(clause(state, Rule.NORMAL_TO_REDUCED))
                     .append("); normal inspection continues.");
         }
+        if (state.scheme() == Scheme.ANSI_ASQ_Z1_4_2008 && consecutiveAccepted < Z14_REDUCED_LOTS) {
+            text.append(' ').append(consecutiveAccepted).append(" consecutive lot(s) accepted on normal inspection; 10"
+                    + " allow reduced inspection (").append(clause(state, Rule.NORMAL_TO_REDUCED)).append(").");
+        }
         if (!accepted) {
-            text.append(" First lot not accepted in the last ").append(window.size())
-                    .append("; a second within 5 consecutive lots switches to tightened inspection (")
+            text.append(" This is the only lot not accepted among the last ").append(window.size())
+                    .append(" on normal inspection; another within 5 consecutive lots switches to tightened inspection (")
                     .append(clause(state, Rule.NORMAL_TO_TIGHTENED)).append(").");
         }
         SwitchingState next = new SwitchingState(state.scheme(), Severity.NORMAL, false, window, score,

@@ -65,7 +65,7 @@ class SingleSamplingPlansTest {
         "200000, III,   0.010, Q,    ↓,       R,    2000, 0,  1,  false", // Q, AQL 0.010: down arrow
         "600000, III,   10,    R,    ↑,       K,    125,  18, 19, false", // R, AQL 10: up to K 18/19
         "10,     II,    0.010, B,    ↓,       R,    10,   0,  1,  true",  // B, AQL 0.010 -> R n 2000 >= lot 10: 100 %
-        "8,      II,    10,    A,    0/1,     A,    2,    0,  1,  false", // A, AQL 10: ISO transcription "0 1" (conflict)
+        "8,      II,    10,    A,    0/1,     A,    2,    0,  1,  false", // A, AQL 10: ISO retyped copy "0 1" (conflict)
     })
     void tightenedInspection(int lotSize, String level, String aql, CodeLetter code, String printed, CodeLetter used,
             int n, int ac, int re, boolean full) {
@@ -123,7 +123,7 @@ class SingleSamplingPlansTest {
 
     @Test
     void theConflictingTightenedCellFollowsEachSchemesSource() {
-        // ISO 2859-1:1999 Table 2-B, code letter A, AQL 10: "0 1" per the only ISO transcription (GB/T 2828.1-2012);
+        // ISO 2859-1:1999 Table 2-B, code letter A, AQL 10: "0 1" per the only ISO retyped copy (GB/T 2828.1-2012);
         // ANSI/ASQ Z1.4-2008 Table II-B prints a down arrow there: D, n 8, 1/2. SAMPLING.md section 8, item 1: open.
         assertEquals("0/1", SingleSamplingPlans.printedCell(ISO, Severity.TIGHTENED, CodeLetter.A, Aql.AQL_10));
         assertEquals("↓", SingleSamplingPlans.printedCell(Z14, Severity.TIGHTENED, CodeLetter.A, Aql.AQL_10));

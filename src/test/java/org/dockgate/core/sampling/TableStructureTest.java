@@ -13,8 +13,8 @@ import org.junit.jupiter.params.provider.EnumSource;
 
 /**
  * Structural checks of the stored tables, as listed in SAMPLING.md section 6 (the checks its
- * transcriptions were subjected to), so that a typo in a text block cannot go unnoticed even where
- * both transcriptions might share it.
+ * retyped copies were subjected to), so that a typo in a text block cannot go unnoticed even where
+ * both retyped copies might share it.
  */
 class TableStructureTest {
 

@@ -18,16 +18,16 @@ import tools.jackson.databind.json.JsonMapper;
 
 /**
  * Every cell of the tables stored as printed (with arrows), after resolution, against an independent
- * resolved transcription (src/test/resources/sampling, see SOURCE.md there):
- * ISO 2859-1:1999 Tables 2-A/2-B/2-C against the GB/T 2828.1-2012 transcription, and
- * ANSI/ASQ Z1.4-2008 Tables II-A/II-B/II-C against the MIL-STD-105E transcription, AQL 0.010 … 10,
+ * resolved copy (src/test/resources/sampling, see SOURCE.md there):
+ * ISO 2859-1:1999 Tables 2-A/2-B/2-C against the GB/T 2828.1-2012 retyped copy, and
+ * ANSI/ASQ Z1.4-2008 Tables II-A/II-B/II-C against the MIL-STD-105E retyped copy, AQL 0.010 … 10,
  * code letters A … R (and S for tightened). One case per table.
  *
- * <p>The two transcriptions disagree in one cell shared by both tables, Table 2-B code letter A at
+ * <p>The two retyped copies disagree in one cell shared by both tables, Table 2-B code letter A at
  * AQL 10 (ISO "0 1" vs Z1.4 ↓); each scheme is compared with its own source, so both values are
  * checked, and {@link #sourcesDisagreeOnlyWhereSamplingMdSaysSo} pins that the disagreement is that cell alone.
  */
-class PlanTablesMatchTranscriptionTest {
+class PlanTablesMatchResolvedCopyTest {
 
     private static final JsonNode ISO_JSON = read("/sampling/iso2859_1_1999_single_resolved.json");
     private static final JsonNode MIL_JSON = read("/sampling/mil105e_z14_single_resolved.json");
@@ -44,7 +44,7 @@ class PlanTablesMatchTranscriptionTest {
 
     @ParameterizedTest(name = "{0} {1}")
     @MethodSource("tables")
-    void everyResolvedCellMatchesTheTranscription(Scheme scheme, Severity severity) {
+    void everyResolvedCellMatchesTheResolvedCopy(Scheme scheme, Severity severity) {
         JsonNode source = scheme == Scheme.ISO_2859_1_1999 ? ISO_JSON : MIL_JSON;
         JsonNode table = source.get("plans").get(severity.name().toLowerCase(Locale.ROOT));
         // the column order of the file must be the AQL series, or the comparison below would be shifted
@@ -122,7 +122,7 @@ class PlanTablesMatchTranscriptionTest {
     }
 
     private static JsonNode read(String resource) {
-        try (InputStream in = PlanTablesMatchTranscriptionTest.class.getResourceAsStream(resource)) {
+        try (InputStream in = PlanTablesMatchResolvedCopyTest.class.getResourceAsStream(resource)) {
             if (in == null) {
                 throw new IllegalStateException("missing test resource " + resource);
             }
