@@ -88,9 +88,10 @@ public enum Aql {
      * Parses an AQL written as a decimal number ({@code "1"}, {@code "1.0"}, {@code "0.65"}) and
      * finds it in the series.
      *
-     * @param text the AQL in percent nonconforming
+     * @param text the AQL in percent nonconforming, plain decimal notation
      * @return the series member
-     * @throws IllegalArgumentException when {@code text} is null, not a number or not in the series
+     * @throws IllegalArgumentException when {@code text} is null, blank, not a decimal number (including
+     *     {@code NaN} and {@code Infinity}) or not in the series
      */
     public static Aql parse(String text) {
         if (text == null || text.isBlank()) {
@@ -98,7 +99,8 @@ public enum Aql {
         }
         double value;
         try {
-            value = Double.parseDouble(text.trim());
+            // BigDecimal accepts plain decimal notation only (no NaN, Infinity, hex or type suffixes)
+            value = new java.math.BigDecimal(text.trim()).doubleValue();
         } catch (NumberFormatException e) {
             throw new IllegalArgumentException("AQL '" + text + "' is not a number; valid values are "
                     + validList() + ".");

@@ -196,6 +196,12 @@ class SingleSamplingPlansTest {
         assertThrows(IllegalArgumentException.class, () -> Aql.of(15)); // nonconformities per 100 units: out of scope
         assertThrows(IllegalArgumentException.class, () -> Aql.parse("one"));
         assertThrows(IllegalArgumentException.class, () -> Aql.parse(" "));
+        assertThrows(IllegalArgumentException.class, () -> Aql.parse("NaN"));
+        assertThrows(IllegalArgumentException.class, () -> Aql.parse("Infinity"));
+        assertThrows(IllegalArgumentException.class, () -> Aql.parse("1f"));
+        assertEquals("AQL 'one' is not a number; valid values are 0.010, 0.015, 0.025, 0.040, 0.065, 0.10, 0.15,"
+                + " 0.25, 0.40, 0.65, 1.0, 1.5, 2.5, 4.0, 6.5, 10.", assertThrows(IllegalArgumentException.class,
+                        () -> Aql.parse("one")).getMessage());
         assertEquals(Aql.AQL_1_0, Aql.parse("1"));
         assertEquals(Aql.AQL_0_010, Aql.parse("0.01"));
         assertEquals(Aql.AQL_10, Aql.parse("10.0"));
