@@ -1,0 +1,75 @@
+package org.dockgate.core.procedure;
+
+import java.util.List;
+import java.util.OptionalDouble;
+import org.dockgate.core.sampling.SamplingPlan;
+import org.dockgate.core.series.Direction;
+
+/**
+ * A proposed inspection procedure: the tests with their parameters, the acceptance limits per metric
+ * with guard bands and TURs, the sampling plans, what to record and what to beware of. Every derived
+ * value carries the reasoning that produced it, for the engineer who reviews it.
+ */
+public record ProcedureProposal(StaticCalibration staticCalibration, NoiseCapture noiseCapture,
+                                FrequencySweep frequencySweep, List<MetricAcceptance> acceptance,
+                                List<SamplingRow> sampling, List<String> environment, List<String> cautions,
+                                int estimatedBenchMinutes, List<String> reasoning) {
+
+    public ProcedureProposal {
+        acceptance = List.copyOf(acceptance);
+        sampling = List.copyOf(sampling);
+        environment = List.copyOf(environment);
+        cautions = List.copyOf(cautions);
+        reasoning = List.copyOf(reasoning);
+    }
+
+    /** Whether every metric with a TUR reaches 4:1; when not, approval needs a recorded justification. */
+    public boolean allTestUncertaintyRatiosAdequate() {
+        return acceptance.stream().allMatch(a -> a.testUncertaintyRatio().isEmpty() || a.turAdequate());
+    }
+
+    /** Test points in the input unit, visited in order for each cycle. */
+    public record StaticCalibration(List<Double> pointsPercentOfSpan, List<Double> pointsInput, String inputUnit,
+                                    List<Direction> directions, int cycles, int settleSeconds,
+                                    String referenceInstrument, List<String> reasoning) {
+        public StaticCalibration {
+            pointsPercentOfSpan = List.copyOf(pointsPercentOfSpan);
+            pointsInput = List.copyOf(pointsInput);
+            directions = List.copyOf(directions);
+            reasoning = List.copyOf(reasoning);
+        }
+
+        public int readingsPerUnit() {
+            return pointsInput.size() * directions.size() * cycles;
+        }
+    }
+
+    public record NoiseCapture(int samples, double sampleRateHz, double durationSeconds, List<String> reasoning) {
+        public NoiseCapture {
+            reasoning = List.copyOf(reasoning);
+        }
+    }
+
+    public record FrequencySweep(double referenceHz, List<Double> frequenciesHz, double amplitude, String amplitudeUnit,
+                                 String referenceInstrument, List<String> reasoning) {
+        public FrequencySweep {
+            frequenciesHz = List.copyOf(frequenciesHz);
+            reasoning = List.copyOf(reasoning);
+        }
+    }
+
+    /**
+     * One metric's limits: the tolerance from the datasheet, the planned expanded uncertainty of the
+     * measurement, the acceptance limits the decision rule gives, and the TUR.
+     */
+    public record MetricAcceptance(Metric metric, String unit, OptionalDouble toleranceLower,
+                                   OptionalDouble toleranceUpper, OptionalDouble plannedExpandedUncertainty,
+                                   double coverageFactor, OptionalDouble acceptanceLower,
+                                   OptionalDouble acceptanceUpper, OptionalDouble testUncertaintyRatio,
+                                   boolean turAdequate, String referenceInstrument, String reasoning) {
+    }
+
+    /** The plans for one typical lot size under the three severities. */
+    public record SamplingRow(int lotSize, SamplingPlan normal, SamplingPlan tightened, SamplingPlan reduced) {
+    }
+}
