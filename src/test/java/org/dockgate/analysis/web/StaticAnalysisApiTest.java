@@ -149,6 +149,19 @@ class StaticAnalysisApiTest {
                 .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON));
     }
 
+    @Test
+    void theEndpointsAreDocumentedWithExamples() throws Exception {
+        mvc.perform(org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get("/v3/api-docs"))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString("/api/v1/analysis/static")))
+                .andExpect(content().string(containsString("/api/v1/analysis/noise")))
+                .andExpect(content().string(containsString("/api/v1/analysis/frequency-response")))
+                .andExpect(content().string(containsString("/api/v1/analysis/rtd/resistance")))
+                .andExpect(content().string(containsString("/api/v1/analysis/rtd/temperature")))
+                .andExpect(content().string(containsString("0-10 bar transducer, two cycles up, one down")))
+                .andExpect(content().string(containsString("accelerometer sweep, reference 160 Hz")));
+    }
+
     /** A JSON number within an absolute tolerance, read as a double whatever type the JSON parser picked. */
     static ResultMatcher number(String path, double expected, double tolerance) {
         return jsonPath(path).value(closeTo(expected, tolerance), Double.class);
