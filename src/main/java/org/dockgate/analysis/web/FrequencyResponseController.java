@@ -18,7 +18,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Reference amplitude and −3 dB bandwidth of a sweep: {@code POST /api/v1/analysis/frequency-response}. */
 @RestController
-@Tag(name = "Analysis")
+@Tag(name = "Sensor metrics")
 class FrequencyResponseController {
 
     static final String EXAMPLE_REQUEST = """

@@ -16,7 +16,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Noise, resolution and dynamic range from zero-input samples: {@code POST /api/v1/analysis/noise}. */
 @RestController
-@Tag(name = "Analysis")
+@Tag(name = "Sensor metrics")
 class NoiseAnalysisController {
 
     static final String EXAMPLE_REQUEST = """

@@ -15,7 +15,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** IEC 60751 platinum RTDs: {@code GET /api/v1/analysis/rtd/resistance} and {@code /temperature}. */
 @RestController
-@Tag(name = "Analysis")
+@Tag(name = "RTDs", description = "IEC 60751 platinum resistance thermometers")
 class RtdController {
 
     record ResistanceResponse(Double resistanceOhm, Double sensitivityOhmPerC, Double toleranceC,

@@ -21,7 +21,7 @@ import org.springframework.web.bind.annotation.RestController;
 
 /** Static characteristics of one calibration series: {@code POST /api/v1/analysis/static}. */
 @RestController
-@Tag(name = "Analysis")
+@Tag(name = "Sensor metrics", description = "Static characteristics, noise and frequency response; nothing is saved")
 class StaticAnalysisController {
 
     static final String EXAMPLE_REQUEST = """
