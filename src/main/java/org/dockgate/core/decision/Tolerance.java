@@ -17,8 +17,9 @@ public record Tolerance(OptionalDouble lower, OptionalDouble upper) {
     /**
      * Validates the zone.
      *
-     * @throws IllegalArgumentException when neither limit is given, a limit is NaN or infinite, or
-     *                                  T_L ≥ T_U (a zone of zero width cannot be tested against)
+     * @throws IllegalArgumentException when neither limit is given, a limit is NaN or infinite,
+     *                                  T_L ≥ T_U (a zone of zero width cannot be tested against), or T_U − T_L
+     *                                  overflows a double
      */
     public Tolerance {
         Objects.requireNonNull(lower, "lower");
@@ -28,9 +29,15 @@ public record Tolerance(OptionalDouble lower, OptionalDouble upper) {
         }
         lower.ifPresent(value -> InputChecks.finite("lowerLimit", value));
         upper.ifPresent(value -> InputChecks.finite("upperLimit", value));
-        if (lower.isPresent() && upper.isPresent() && !(lower.getAsDouble() < upper.getAsDouble())) {
-            throw new IllegalArgumentException("lowerLimit " + lower.getAsDouble()
-                    + " must be below upperLimit " + upper.getAsDouble());
+        if (lower.isPresent() && upper.isPresent()) {
+            if (!(lower.getAsDouble() < upper.getAsDouble())) {
+                throw new IllegalArgumentException("lowerLimit " + lower.getAsDouble()
+                        + " must be below upperLimit " + upper.getAsDouble());
+            }
+            if (!Double.isFinite(upper.getAsDouble() - lower.getAsDouble())) {
+                throw new IllegalArgumentException("the tolerance from " + lower.getAsDouble() + " to "
+                        + upper.getAsDouble() + " is too wide to compute with");
+            }
         }
     }
 

@@ -57,7 +57,7 @@ public record PChart(double centerLine, List<PChartPoint> points) {
      *
      * @param subgroups at least one
      * @return the chart
-     * @throws IllegalArgumentException when there are no subgroups
+     * @throws IllegalArgumentException when there are no subgroups, or their total count overflows a long
      */
     public static PChart of(List<Subgroup> subgroups) {
         if (subgroups == null || subgroups.isEmpty()) {
@@ -66,8 +66,11 @@ public record PChart(double centerLine, List<PChartPoint> points) {
         long totalInspected = 0;
         long totalRejected = 0;
         for (Subgroup subgroup : subgroups) {
-            totalInspected = Math.addExact(totalInspected, subgroup.inspected());
-            totalRejected += subgroup.rejected();
+            if (totalInspected > Long.MAX_VALUE - subgroup.inspected()) {
+                throw new IllegalArgumentException("the subgroups' total inspected count is too large");
+            }
+            totalInspected += subgroup.inspected();
+            totalRejected += subgroup.rejected(); // rejected ≤ inspected, so this cannot overflow first
         }
         double centre = (double) totalRejected / totalInspected;
         double spread = centre * (1.0 - centre);

@@ -47,7 +47,7 @@ public record UncertaintyContribution(String name, Basis basis, double standardU
      * Validates the line.
      *
      * @throws IllegalArgumentException when the name is blank, u is NaN, infinite or negative, ν is NaN or below 1,
-     *                                  or c is NaN or infinite
+     *                                  c is NaN or infinite, or |c|·u overflows a double
      */
     public UncertaintyContribution {
         if (name == null || name.isBlank()) {
@@ -57,6 +57,9 @@ public record UncertaintyContribution(String name, Basis basis, double standardU
         InputChecks.nonNegative("standardUncertainty of '" + name + "'", standardUncertainty);
         InputChecks.degreesOfFreedom("degreesOfFreedom of '" + name + "'", degreesOfFreedom);
         InputChecks.finite("sensitivityCoefficient of '" + name + "'", sensitivityCoefficient);
+        if (!Double.isFinite(Math.abs(sensitivityCoefficient) * standardUncertainty)) {
+            throw new IllegalArgumentException("the contribution |c|·u of '" + name + "' is too large to compute with");
+        }
     }
 
     /**
