@@ -1,0 +1,138 @@
+package org.dockgate.instruments;
+
+import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
+import java.util.List;
+import java.util.Optional;
+import org.dockgate.core.decision.ExpandedUncertainty;
+import org.dockgate.core.quantity.Units;
+
+/**
+ * A reference instrument as the register holds it, with its status on the day {@code asOf}. Immutable:
+ * a snapshot for pages, the API and other modules ({@link InstrumentService} makes them).
+ *
+ * @param identifier   unique register identifier, e.g. {@code RI-PRS-01}
+ * @param description  what the instrument is
+ * @param quantity     what it measures or generates, as {@link Quantity#label()} (e.g. "pressure")
+ * @param rangeMin     lower end of its range, in {@code unit}
+ * @param rangeMax     upper end of its range, in {@code unit}, &gt; rangeMin
+ * @param unit         the range unit as entered (e.g. "bar", "°C")
+ * @param current      the calibration in force: the latest by calibration date
+ * @param calibrations every calibration record, newest first (the current one first)
+ * @param asOf         the day the status was computed for (from the application clock, UTC)
+ * @param status       the status of the current calibration on {@code asOf}
+ * @param daysUntilDue days from {@code asOf} to the current due date (0 or negative once expired)
+ * @param version      the register entry's version, to send back with a change (optimistic locking)
+ */
+public record InstrumentView(String identifier, String description, String quantity, double rangeMin,
+                             double rangeMax, String unit, CalibrationRecord current,
+                             List<CalibrationRecord> calibrations, LocalDate asOf, CalibrationStatus status,
+                             long daysUntilDue, long version) {
+
+    public InstrumentView {
+        calibrations = List.copyOf(calibrations);
+    }
+
+    static InstrumentView of(String identifier, String description, String quantity, double rangeMin,
+                             double rangeMax, String unit, List<CalibrationRecord> newestFirst, LocalDate today,
+                             long version) {
+        CalibrationRecord current = newestFirst.get(0);
+        return new InstrumentView(identifier, description, quantity, rangeMin, rangeMax, unit, current, newestFirst,
+                today, CalibrationStatus.of(current.dueOn(), today),
+                ChronoUnit.DAYS.between(today, current.dueOn()), version);
+    }
+
+    /** @return whether the instrument is due within {@value CalibrationStatus#DUE_SOON_DAYS} days (flag it) */
+    public boolean dueSoon() {
+        return status == CalibrationStatus.DUE_SOON;
+    }
+
+    /** @return whether it may be chosen for a test on {@code asOf} (not expired) */
+    public boolean selectable() {
+        return status.selectable();
+    }
+
+    /** @return the day it went out of calibration (its due date), when expired */
+    public Optional<LocalDate> expiredSince() {
+        return status == CalibrationStatus.EXPIRED ? Optional.of(current.dueOn()) : Optional.empty();
+    }
+
+    /** @return max(|rangeMin|, |rangeMax|), the full scale that percent-of-full-scale figures refer to */
+    public double fullScale() {
+        return Math.max(Math.abs(rangeMin), Math.abs(rangeMax));
+    }
+
+    /** @return the calibration that was in force on a day (calibrated on or before it, due after it), if any */
+    public Optional<CalibrationRecord> calibrationOn(LocalDate day) {
+        return calibrations.stream().filter(c -> !day.isBefore(c.calibratedOn()))
+                .findFirst()
+                .filter(c -> c.covers(day));
+    }
+
+    /**
+     * Whether the range [min, max], given in {@code rangeUnit}, lies inside this instrument's range once
+     * converted to its unit ({@link Units#convert}, affine for temperatures). A relative slack of 1e-9 of
+     * the range absorbs the rounding of the conversion (20 bar written as 290.0755 psi still fits 0–20 bar).
+     *
+     * @param min       lower end wanted
+     * @param max       upper end wanted, ≥ min
+     * @param rangeUnit their unit, of this instrument's kind
+     * @return whether the wanted range is covered
+     * @throws IllegalArgumentException when a number is not finite, min &gt; max, or the unit is unknown or of another kind
+     */
+    public boolean covers(double min, double max, String rangeUnit) {
+        if (!Double.isFinite(min) || !Double.isFinite(max)) {
+            throw new IllegalArgumentException("The wanted range must be given by finite numbers.");
+        }
+        if (min > max) {
+            throw new IllegalArgumentException("The wanted range starts above its end: " + min + " > " + max + ".");
+        }
+        double low = Units.convert(min, rangeUnit, unit);
+        double high = Units.convert(max, rangeUnit, unit);
+        double slack = slack();
+        return Math.min(low, high) >= rangeMin - slack && Math.max(low, high) <= rangeMax + slack;
+    }
+
+    /**
+     * The expanded uncertainty U of the current calibration at a value, in the value's unit: the value is
+     * converted to the range unit, its band found (first band whose {@code upTo} ≥ value), U computed
+     * there ({@link UncertaintyBand#expandedUncertaintyAt}) and converted back as a difference (so 0.03 °C
+     * is 0.03 K, not 273.18 K). The coverage factor is {@code current().coverageFactor()}. The instrument's
+     * status is not checked here: use {@link InstrumentService#requireSelectable} for that.
+     *
+     * @param value     the value, finite
+     * @param valueUnit its unit, of this instrument's kind
+     * @return U in {@code valueUnit}
+     * @throws IllegalArgumentException when the value is not finite, the unit does not fit, or the value lies outside the range
+     */
+    public double expandedUncertaintyAt(double value, String valueUnit) {
+        double inRangeUnit = Units.convert(value, valueUnit, unit);
+        double slack = slack();
+        if (inRangeUnit < rangeMin - slack || inRangeUnit > rangeMax + slack) {
+            throw new IllegalArgumentException(identifier + " covers " + Numbers.plain(rangeMin) + " to "
+                    + Numbers.plain(rangeMax) + " " + unit + "; " + Numbers.plain(value) + " " + valueUnit.strip()
+                    + " lies outside it.");
+        }
+        UncertaintyBand band = current.bands().stream().filter(b -> inRangeUnit <= b.upTo() + slack).findFirst()
+                .orElse(current.bands().get(current.bands().size() - 1));
+        double u = band.expandedUncertaintyAt(inRangeUnit, fullScale());
+        // An uncertainty is a difference: convert it without the offset of affine (temperature) units.
+        return Units.convert(u, unit, valueUnit) - Units.convert(0.0, unit, valueUnit);
+    }
+
+    /**
+     * U and k of the current calibration at a value, as the core's decision rules take them.
+     *
+     * @param value     the value
+     * @param valueUnit its unit
+     * @return U (in {@code valueUnit}) with the certificate's k
+     * @throws IllegalArgumentException as {@link #expandedUncertaintyAt}
+     */
+    public ExpandedUncertainty uncertaintyAt(double value, String valueUnit) {
+        return ExpandedUncertainty.of(expandedUncertaintyAt(value, valueUnit), current.coverageFactor());
+    }
+
+    private double slack() {
+        return 1e-9 * Math.max(rangeMax - rangeMin, Math.max(Math.abs(rangeMin), Math.abs(rangeMax)));
+    }
+}
