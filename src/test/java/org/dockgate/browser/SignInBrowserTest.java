@@ -49,6 +49,7 @@ class SignInBrowserTest extends BrowserTestSupport {
         driver.manage().deleteAllCookies();
         driver.get(url("/login"));
         // The user name field has focus on load; Tab moves to the password, Enter submits.
+        waitUpTo(10).until(d -> "username".equals(d.switchTo().activeElement().getDomAttribute("id")));
         driver.switchTo().activeElement().sendKeys("auditor");
         driver.switchTo().activeElement().sendKeys(Keys.TAB);
         driver.switchTo().activeElement().sendKeys("auditor-demo", Keys.ENTER);
