@@ -16,6 +16,12 @@ final class JsonProblems {
 
     static String describe(HttpMessageNotReadableException e) {
         Throwable cause = e.getCause();
+        for (Throwable t = cause; t != null; t = t.getCause()) {
+            // A value type refused its content (e.g. a specification with a unit mismatch): its message is for people.
+            if (t instanceof IllegalArgumentException refused && refused.getMessage() != null) {
+                return refused.getMessage();
+            }
+        }
         if (cause instanceof InvalidFormatException invalid) {
             return "Field '" + path(invalid) + "' has the value '" + invalid.getValue() + "', which is not "
                     + expected(invalid.getTargetType()) + ".";

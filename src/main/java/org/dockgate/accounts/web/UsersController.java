@@ -8,7 +8,6 @@ import org.dockgate.accounts.AccountService;
 import org.dockgate.platform.Role;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
-import org.springframework.validation.BindingResult;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.ModelAttribute;
 import org.springframework.web.bind.annotation.PathVariable;
@@ -51,15 +50,14 @@ class UsersController {
     }
 
     @PostMapping
-    String create(@ModelAttribute("form") NewUserForm form, BindingResult binding, Model model,
-                  RedirectAttributes redirect) {
+    String create(@ModelAttribute("form") NewUserForm form, Model model, RedirectAttributes redirect) {
         try {
             var person = accounts.create(form.username(), form.displayName(), form.password(),
                     form.roles() == null ? Set.of() : form.roles());
             redirect.addFlashAttribute("notice", "Account " + person.username() + " created.");
             return "redirect:/admin/users";
         } catch (AccountException e) {
-            binding.rejectValue(e.field() == null ? "username" : e.field(), "account.refused", e.getMessage());
+            model.addAttribute("errors", java.util.Map.of(e.field() == null ? "username" : e.field(), e.getMessage()));
             model.addAttribute("form", new NewUserForm(form.username(), form.displayName(), "", form.roles()));
             model.addAttribute("users", accounts.all());
             return VIEW;
