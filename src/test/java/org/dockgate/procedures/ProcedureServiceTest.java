@@ -51,7 +51,7 @@ class ProcedureServiceTest {
     long newModel() {
         String part = "T-" + UUID.randomUUID().toString().substring(0, 8);
         var spec = new SensorSpecification(SensorKind.PRESSURE_TRANSDUCER, "bar", 0, 10, "mV",
-                new Sensitivity(10, "mV/bar", 1, ToleranceMode.PERCENT), null, 0.5, 0.25, null, 0.1, 0.05, null, null, null, null);
+                new Sensitivity(10, "mV/bar", 1, ToleranceMode.PERCENT), null, 0.5, 0.25, null, 0.1, 0.2, null, null, null, null);
         return as("engineer", () -> catalogue.createModel(new NewSensorModel(part, "Test transducer", "pressure",
                 OutputKind.VOLTAGE, "10 V", List.of("QSL"), spec))).latest().id();
     }

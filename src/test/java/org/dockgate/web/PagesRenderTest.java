@@ -1,0 +1,43 @@
+package org.dockgate.web;
+
+import static org.hamcrest.Matchers.containsString;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.procedures.ProcedureService;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.test.web.servlet.MockMvc;
+
+/** Every main page renders for the demo data (a template error would be a 500 here). */
+@SpringBootTest
+@AutoConfigureMockMvc
+class PagesRenderTest {
+
+    @Autowired MockMvc mvc;
+    @Autowired CatalogueService catalogue;
+    @Autowired ProcedureService procedures;
+
+    @ParameterizedTest
+    @ValueSource(strings = {"/", "/catalogue", "/catalogue/new", "/suppliers", "/procedures", "/admin/users", "/audit",
+        "/audit/verify", "/MODEL", "/MODEL/revise", "/PROCEDURES_OF_MODEL", "/PROCEDURE"})
+    void rendersForAnEngineerAdmin(String path) throws Exception {
+        var model = catalogue.modelByPartNumber("QP-250").orElseThrow();
+        var procedure = procedures.approvedFor(model.id()).orElseThrow();
+        String resolved = switch (path) {
+            case "/MODEL" -> "/catalogue/" + model.id();
+            case "/MODEL/revise" -> "/catalogue/" + model.id() + "/revise";
+            case "/PROCEDURES_OF_MODEL" -> "/procedures?model=" + model.id();
+            case "/PROCEDURE" -> "/procedures/" + procedure.id();
+            default -> path;
+        };
+        mvc.perform(get(resolved).with(user("admin").roles("ENGINEER", "ADMIN", "AUDITOR", "SUPERVISOR")))
+                .andExpect(status().isOk()).andExpect(content().string(containsString("</html>")));
+    }
+}
