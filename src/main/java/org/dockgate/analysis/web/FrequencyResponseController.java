@@ -32,13 +32,13 @@ class FrequencyResponseController {
             {"referenceAmplitude": 100.2, "bandwidthHz": 6699.405501, "withinSweep": true}
             """;
 
-    record PointRequest(
+    record FrequencyPointRequest(
             @Schema(description = "Excitation frequency in Hz, greater than 0", example = "1000") Double frequencyHz,
             @Schema(description = "Response amplitude, greater than 0", example = "99.0") Double amplitude) {
     }
 
     record FrequencyResponseRequest(
-            @Schema(description = "The sweep, at least two distinct frequencies, any order") List<PointRequest> points,
+            @Schema(description = "The sweep, at least two distinct frequencies, any order") List<FrequencyPointRequest> points,
             @Schema(description = "Reference frequency in Hz within the sweep; the lowest frequency when omitted",
                     example = "160") Double referenceFrequencyHz) {
     }
@@ -73,7 +73,7 @@ class FrequencyResponseController {
         }
         List<FrequencyPoint> points = new ArrayList<>();
         for (int i = 0; i < request.points().size(); i++) {
-            PointRequest p = request.points().get(i);
+            FrequencyPointRequest p = request.points().get(i);
             if (p == null) {
                 throw new IllegalArgumentException("'points[" + i + "]' must be a point, not null.");
             }

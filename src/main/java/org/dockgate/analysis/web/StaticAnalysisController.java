@@ -42,7 +42,7 @@ class StaticAnalysisController {
             """;
 
     /** One reading; {@code direction} defaults to UP. */
-    record PointRequest(
+    record CalibrationPointRequest(
             @Schema(description = "Reference stimulus (input units)", example = "5") Double input,
             @Schema(description = "Sensor output (output units)", example = "50.12") Double output,
             @Schema(description = "Traverse direction; UP when omitted", example = "UP") Direction direction) {
@@ -52,7 +52,7 @@ class StaticAnalysisController {
             @Schema(description = "Lower range value (input units)", example = "0") Double rangeMin,
             @Schema(description = "Upper range value (input units)", example = "10") Double rangeMax,
             @Schema(description = "The readings; repeated input and direction pairs count as repeats")
-            List<PointRequest> points) {
+            List<CalibrationPointRequest> points) {
     }
 
     record StaticResponse(
@@ -119,7 +119,7 @@ class StaticAnalysisController {
         // The API has no cycle field: the k-th reading at one input and direction is cycle k.
         Map<String, Integer> cycles = new HashMap<>();
         for (int i = 0; i < request.points().size(); i++) {
-            PointRequest p = request.points().get(i);
+            CalibrationPointRequest p = request.points().get(i);
             if (p == null) {
                 throw new IllegalArgumentException("'points[" + i + "]' must be a reading, not null.");
             }
