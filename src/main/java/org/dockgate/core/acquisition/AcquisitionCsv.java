@@ -1,0 +1,481 @@
+package org.dockgate.core.acquisition;
+
+import java.io.FilterReader;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Map;
+import java.util.NoSuchElementException;
+import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.function.Consumer;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.measure.UnitConverter;
+import org.apache.commons.csv.CSVException;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.dockgate.core.quantity.Units;
+import org.dockgate.core.series.Direction;
+
+/**
+ * A streaming parser of the data-acquisition CSV format (DEVELOPERS.md, "Data-acquisition CSV format"):
+ *
+ * <pre>
+ * serial,test,point,direction,cycle,value,unit
+ * SN-0001,STATIC,0,UP,1,0.052,mV
+ * SN-0001,STATIC,29.0075 psi,UP,1,20.11,mV
+ * SN-0001,NOISE,0,,,0.0012,mV
+ * SN-0001,SWEEP,160,,,100.2,mV
+ * </pre>
+ *
+ * <p>Each row is validated on its own and every problem is reported with its line and column; parsing never
+ * stops at a bad row (only at a wrong header or broken quoting, after which the columns cannot be trusted).
+ * Valid rows go to the consumer one at a time, so memory does not grow with the file: the caller decides
+ * whether to keep, store or count them (an all-or-nothing import stages them and commits only a valid file).
+ * Blank lines, and rows whose fields are all empty (spreadsheet exports), are skipped; a leading byte-order
+ * mark is ignored; fields may be quoted (RFC 4180, Commons CSV).
+ *
+ * <p>Numbers are plain decimals with an optional exponent ({@code -1.5}, {@code 2e-3}); NaN, infinities,
+ * numbers too large for double precision, decimal commas and hexadecimal are refused.
+ */
+public final class AcquisitionCsv {
+
+    /** The header row, exactly. */
+    public static final String HEADER = "serial,test,point,direction,cycle,value,unit";
+
+    /** The columns in order. */
+    public static final List<String> COLUMNS = List.of(HEADER.split(","));
+
+    /** At most this many errors are listed; the rest are counted. */
+    public static final int MAX_LISTED_ERRORS = 200;
+
+    /** Progress is reported every this many data rows unless told otherwise. */
+    public static final int DEFAULT_PROGRESS_EVERY = 10_000;
+
+    /** The longest serial number accepted. */
+    public static final int MAX_SERIAL_LENGTH = 100;
+
+    private static final String NUMBER = "[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?";
+    private static final Pattern PLAIN_NUMBER = Pattern.compile(NUMBER);
+    private static final Pattern NUMBER_WITH_UNIT = Pattern.compile("(" + NUMBER + ")\\s*(.*)");
+    private static final Pattern NOT_FINITE = Pattern.compile("[+-]?(nan|inf|infinity|∞)", Pattern.CASE_INSENSITIVE);
+    private static final Pattern WHOLE_NUMBER = Pattern.compile("\\+?\\d{1,9}");
+
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder()
+            .setIgnoreEmptyLines(false) // blank lines are skipped here, so that line numbers stay true
+            .setIgnoreSurroundingSpaces(true)
+            .get();
+
+    private final ExpectedUnits units;
+    private final Consumer<AcquiredReading> consumer;
+    private final Map<String, Object> converters = new HashMap<>();
+    private final List<RowError> errors = new ArrayList<>();
+    private long errorsNotListed;
+
+    private AcquisitionCsv(ExpectedUnits units, Consumer<AcquiredReading> consumer) {
+        this.units = units;
+        this.consumer = consumer;
+    }
+
+    /**
+     * Parses a file, reporting progress every {@value #DEFAULT_PROGRESS_EVERY} rows.
+     *
+     * @param reader   the file's characters (the caller opens and closes it)
+     * @param units    the units to convert to
+     * @param consumer receives each valid reading in file order; it may refuse one by throwing
+     *                 {@link IllegalArgumentException}, whose message becomes that line's error
+     * @param progress told the progress
+     * @return the report: rows read, readings accepted, errors
+     * @throws IllegalArgumentException when an argument is null
+     * @throws UncheckedIOException     when reading fails (not for malformed content, which is reported)
+     */
+    public static AcquisitionReport parse(Reader reader, ExpectedUnits units, Consumer<AcquiredReading> consumer,
+            ProgressListener progress) {
+        return parse(reader, units, consumer, progress, DEFAULT_PROGRESS_EVERY);
+    }
+
+    /**
+     * Parses a file (format in the class description).
+     *
+     * @param reader        the file's characters
+     * @param units         the units to convert to
+     * @param consumer      receives each valid reading, see {@link #parse(Reader, ExpectedUnits, Consumer, ProgressListener)}
+     * @param progress      told the progress every {@code progressEvery} rows and at the end
+     * @param progressEvery rows between progress reports, at least 1
+     * @return the report
+     * @throws IllegalArgumentException when an argument is null or progressEvery &lt; 1
+     * @throws UncheckedIOException     when reading fails
+     */
+    public static AcquisitionReport parse(Reader reader, ExpectedUnits units, Consumer<AcquiredReading> consumer,
+            ProgressListener progress, int progressEvery) {
+        if (reader == null || units == null || consumer == null || progress == null) {
+            throw new IllegalArgumentException("Parsing a data-acquisition file needs a reader, the expected units, a"
+                    + " consumer and a progress listener");
+        }
+        if (progressEvery < 1) {
+            throw new IllegalArgumentException("Progress must be reported every 1 row or more, got " + progressEvery);
+        }
+        return new AcquisitionCsv(units, consumer).run(new CountingReader(reader), progress, progressEvery);
+    }
+
+    private AcquisitionReport run(CountingReader input, ProgressListener progress, int progressEvery) {
+        long rows = 0;
+        long accepted = 0;
+        long line = 1;
+        try (CSVParser parser = CSVParser.parse(input, FORMAT)) {
+            Iterator<CSVRecord> records = parser.iterator();
+            boolean headerSeen = false;
+            while (true) {
+                line = parser.getCurrentLineNumber() + 1;
+                CSVRecord record;
+                try {
+                    record = records.next();
+                } catch (NoSuchElementException end) {
+                    break;
+                }
+                if (isBlank(record)) {
+                    continue;
+                }
+                if (!headerSeen) {
+                    Optional<String> problem = headerProblem(record);
+                    if (problem.isPresent()) {
+                        error(line, null, problem.get());
+                        return report(rows, accepted, progress, input);
+                    }
+                    headerSeen = true;
+                    continue;
+                }
+                rows++;
+                AcquiredReading reading = row(line, record);
+                if (reading != null) {
+                    try {
+                        consumer.accept(reading);
+                        accepted++;
+                    } catch (IllegalArgumentException refused) {
+                        error(line, null, refused.getMessage());
+                    }
+                }
+                if (rows % progressEvery == 0) {
+                    progress.progress(rows, input.count);
+                }
+            }
+            if (!headerSeen) {
+                error(1, null, "the file is empty: it must start with the header row '" + HEADER + "'");
+            }
+        } catch (UncheckedIOException e) {
+            if (!(e.getCause() instanceof CSVException)) {
+                throw e;
+            }
+            error(line, null, "the CSV is malformed here (" + e.getCause().getMessage()
+                    + "); a quoted field may be missing its closing quote. Nothing after this line was read");
+        } catch (IOException e) {
+            if (!(e instanceof CSVException)) {
+                throw new UncheckedIOException(e);
+            }
+            error(line, null, "the CSV is malformed here (" + e.getMessage() + ")");
+        }
+        return report(rows, accepted, progress, input);
+    }
+
+    private AcquisitionReport report(long rows, long accepted, ProgressListener progress, CountingReader input) {
+        progress.progress(rows, input.count);
+        return new AcquisitionReport(rows, accepted, errors, errorsNotListed);
+    }
+
+    private static boolean isBlank(CSVRecord record) {
+        for (String field : record) {
+            if (!field.isBlank()) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static Optional<String> headerProblem(CSVRecord record) {
+        List<String> names = new ArrayList<>();
+        for (String field : record) {
+            names.add(field.strip());
+        }
+        if (!names.isEmpty()) {
+            names.set(0, stripBom(names.get(0)));
+        }
+        if (names.equals(COLUMNS)) {
+            return Optional.empty();
+        }
+        String found = String.join(",", names);
+        if (names.size() == COLUMNS.size() && testOf(names.get(1)) != null) {
+            return Optional.of("the header row is missing: the first line must be exactly '" + HEADER
+                    + "', found the data row '" + found + "'");
+        }
+        String hint = found.contains(";") ? " (the separator must be a comma)" : "";
+        return Optional.of("the header row must be exactly '" + HEADER + "', found '" + found + "'" + hint);
+    }
+
+    private static String stripBom(String s) {
+        return s.startsWith("\uFEFF") ? s.substring(1).strip() : s;
+    }
+
+    /** Validates one data row; returns null after recording its errors. */
+    private AcquiredReading row(long line, CSVRecord record) {
+        if (record.size() != COLUMNS.size()) {
+            error(line, null, record.size() + " fields, expected " + COLUMNS.size() + " (" + HEADER + ")");
+            return null;
+        }
+        long before = errorsSeen();
+        String serial = record.get(0).strip();
+        if (serial.isEmpty()) {
+            error(line, "serial", "is empty; the unit's serial number is needed");
+        } else if (serial.length() > MAX_SERIAL_LENGTH) {
+            error(line, "serial", "is " + serial.length() + " characters long, at most " + MAX_SERIAL_LENGTH
+                    + " are accepted");
+        }
+        String testText = record.get(1).strip();
+        AcquisitionTest test = testOf(testText);
+        if (test == null) {
+            error(line, "test", (testText.isEmpty() ? "is empty" : "'" + testText + "' is not a test")
+                    + "; expected STATIC, NOISE or SWEEP");
+        }
+        String pointText = record.get(2).strip();
+        String directionText = record.get(3).strip();
+        String cycleText = record.get(4).strip();
+        double point = Double.NaN;
+        Optional<Direction> direction = Optional.empty();
+        OptionalInt cycle = OptionalInt.empty();
+        if (test == AcquisitionTest.STATIC) {
+            point = quantity(line, "point", pointText, units.inputUnit(), false);
+            direction = direction(line, directionText);
+            cycle = cycle(line, cycleText);
+        } else if (test != null) {
+            point = test == AcquisitionTest.NOISE ? sampleIndex(line, pointText)
+                    : quantity(line, "point", pointText, "Hz", true);
+            mustBeEmpty(line, "direction", directionText, test);
+            mustBeEmpty(line, "cycle", cycleText, test);
+        }
+        String valueText = record.get(5).strip();
+        String unitText = record.get(6).strip();
+        double recorded = number(line, "value", valueText);
+        String target = test == AcquisitionTest.SWEEP ? units.sweepUnit() : units.outputUnit();
+        UnitConverter converter = converter(line, unitText, target);
+        double value = Double.NaN;
+        if (converter != null && !Double.isNaN(recorded)) {
+            value = converter.convert(recorded);
+            if (!Double.isFinite(value)) {
+                error(line, "value", "'" + valueText + "' " + unitText + " is too large in " + target);
+            } else if (test == AcquisitionTest.SWEEP && !(value > 0)) {
+                error(line, "value", "'" + valueText + "' is not an amplitude; a sweep value must be greater than 0");
+            }
+        }
+        if (errorsSeen() > before || test == null) {
+            return null;
+        }
+        return new AcquiredReading(line, serial, test, point, direction, cycle, value, pointText, recorded, unitText);
+    }
+
+    private static AcquisitionTest testOf(String text) {
+        for (AcquisitionTest t : AcquisitionTest.values()) {
+            if (t.name().equalsIgnoreCase(text.strip())) {
+                return t;
+            }
+        }
+        return null;
+    }
+
+    private Optional<Direction> direction(long line, String text) {
+        if (text.equalsIgnoreCase("UP")) {
+            return Optional.of(Direction.UP);
+        }
+        if (text.equalsIgnoreCase("DOWN")) {
+            return Optional.of(Direction.DOWN);
+        }
+        error(line, "direction", (text.isEmpty() ? "is empty" : "'" + text + "' is not a direction")
+                + "; a STATIC row needs UP or DOWN");
+        return Optional.empty();
+    }
+
+    private OptionalInt cycle(long line, String text) {
+        if (WHOLE_NUMBER.matcher(text).matches()) {
+            int c = Integer.parseInt(text.startsWith("+") ? text.substring(1) : text);
+            if (c >= 1) {
+                return OptionalInt.of(c);
+            }
+        }
+        error(line, "cycle", (text.isEmpty() ? "is empty" : "'" + text + "' is not a cycle")
+                + "; a STATIC row needs a whole number of 1 or more");
+        return OptionalInt.empty();
+    }
+
+    private double sampleIndex(long line, String text) {
+        if (WHOLE_NUMBER.matcher(text).matches()) {
+            return Integer.parseInt(text.startsWith("+") ? text.substring(1) : text);
+        }
+        error(line, "point", (text.isEmpty() ? "is empty" : "'" + text + "' is not a sample index")
+                + "; a NOISE row's point is a whole number of 0 or more");
+        return Double.NaN;
+    }
+
+    private void mustBeEmpty(long line, String column, String text, AcquisitionTest test) {
+        if (!text.isEmpty()) {
+            error(line, column, "must be empty for a " + test + " row, found '" + text + "'");
+        }
+    }
+
+    /** A number with an optional unit after it, converted to the target unit; NaN after an error. */
+    private double quantity(long line, String column, String text, String target, boolean positive) {
+        if (text.isEmpty()) {
+            error(line, column, "is empty; a number is expected (in " + target + " or a compatible unit)");
+            return Double.NaN;
+        }
+        Matcher m = NUMBER_WITH_UNIT.matcher(text);
+        if (!m.matches()) {
+            error(line, column, notANumber(text));
+            return Double.NaN;
+        }
+        double raw = finite(line, column, m.group(1), text);
+        if (Double.isNaN(raw)) {
+            return raw;
+        }
+        String unit = m.group(2).strip();
+        double converted = raw;
+        if (!unit.isEmpty()) {
+            UnitConverter converter = converter(line, column, unit, target);
+            if (converter == null) {
+                return Double.NaN;
+            }
+            converted = converter.convert(raw);
+        }
+        if (!Double.isFinite(converted)) {
+            error(line, column, "'" + text + "' is too large in " + target);
+            return Double.NaN;
+        }
+        if (positive && !(converted > 0)) {
+            error(line, column, "'" + text + "' is not a frequency; it must be greater than 0");
+            return Double.NaN;
+        }
+        return converted;
+    }
+
+    /** A plain number; NaN after an error. */
+    private double number(long line, String column, String text) {
+        if (text.isEmpty()) {
+            error(line, column, "is empty; a number is expected");
+            return Double.NaN;
+        }
+        if (!PLAIN_NUMBER.matcher(text).matches()) {
+            error(line, column, notANumber(text));
+            return Double.NaN;
+        }
+        return finite(line, column, text, text);
+    }
+
+    private double finite(long line, String column, String number, String text) {
+        double v = Double.parseDouble(number);
+        if (!Double.isFinite(v)) {
+            error(line, column, "'" + text + "' is too large for a number");
+            return Double.NaN;
+        }
+        return v;
+    }
+
+    private static String notANumber(String text) {
+        if (NOT_FINITE.matcher(text).matches()) {
+            return "'" + text + "' is not a finite number";
+        }
+        if (text.matches("[+-]?\\d+,\\d+.*")) {
+            return "'" + text + "' is not a number (write the decimal separator as a point)";
+        }
+        return "'" + text + "' is not a number";
+    }
+
+    private UnitConverter converter(long line, String unit, String target) {
+        return converter(line, "unit", unit, target);
+    }
+
+    /** The cached converter from a unit as written to a target unit; null after recording an error. */
+    private UnitConverter converter(long line, String column, String unit, String target) {
+        if (unit.isEmpty()) {
+            error(line, column, "is empty; the unit is needed (" + target + " or a compatible unit)");
+            return null;
+        }
+        Object cached = converters.computeIfAbsent(unit + "\u0000" + target, key -> lookUp(unit, target));
+        if (cached instanceof UnitConverter c) {
+            return c;
+        }
+        error(line, column, (String) cached);
+        return null;
+    }
+
+    private static Object lookUp(String unit, String target) {
+        try {
+            Units.parse(unit);
+        } catch (IllegalArgumentException e) {
+            return "'" + unit + "' is not a unit Dockgate knows";
+        }
+        if (!Units.isCompatible(unit, target)) {
+            return "'" + unit + "' is not compatible with " + target + " (" + article(Units.dimensionName(target))
+                    + " was expected, '" + unit + "' is " + article(Units.dimensionName(unit)) + ")";
+        }
+        try {
+            return Units.converter(unit, target);
+        } catch (IllegalArgumentException e) {
+            return "'" + unit + "' cannot be converted to " + target;
+        }
+    }
+
+    private static String article(String noun) {
+        return ("aeiou".indexOf(Character.toLowerCase(noun.charAt(0))) >= 0 ? "an " : "a ") + noun;
+    }
+
+    private long errorsSeen() {
+        return errors.size() + errorsNotListed;
+    }
+
+    private void error(long line, String column, String message) {
+        if (errors.size() < MAX_LISTED_ERRORS) {
+            errors.add(new RowError(line, Optional.ofNullable(column), message));
+        } else {
+            errorsNotListed++;
+        }
+    }
+
+    /** Counts the characters read and drops a leading byte-order mark. */
+    private static final class CountingReader extends FilterReader {
+        long count;
+        private boolean first = true;
+
+        CountingReader(Reader in) {
+            super(in);
+        }
+
+        @Override
+        public int read() throws IOException {
+            char[] one = new char[1];
+            int n = read(one, 0, 1);
+            return n < 0 ? -1 : one[0];
+        }
+
+        @Override
+        public int read(char[] buffer, int offset, int length) throws IOException {
+            int n = super.read(buffer, offset, length);
+            if (n > 0) {
+                count += n;
+                if (first) {
+                    first = false;
+                    if (buffer[offset] == '\uFEFF') {
+                        System.arraycopy(buffer, offset + 1, buffer, offset, n - 1);
+                        n--;
+                        if (n == 0) {
+                            return read(buffer, offset, length);
+                        }
+                    }
+                }
+            }
+            return n;
+        }
+    }
+}
