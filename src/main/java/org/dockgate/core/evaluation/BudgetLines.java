@@ -86,7 +86,7 @@ final class BudgetLines {
         }
         Environment e = environment.get();
         if (Double.isNaN(gainBase) && Double.isNaN(zeroBase)) {
-            return List.of(none("environment: a temperature effect alike at every set point does not change the "
+            return List.of(none("environment: a temperature effect that stays the same throughout the test does not change the "
                     + metricLabel + ", no contribution"));
         }
         double dt = Math.abs(e.temperatureDeviationC());

@@ -154,7 +154,7 @@ final class StaticMetrics {
             double line = terminal ? yLo + (yHi - yLo) * ((e.getKey() - xLo) / (xHi - xLo))
                     : sc.fit().valueAt(e.getKey());
             double deviation = Math.abs(e.getValue() - line);
-            if (deviation > worst) {
+            if (clearlyLarger(deviation, worst)) {
                 worst = deviation;
                 worstInput = e.getKey();
             }
@@ -192,7 +192,7 @@ final class StaticMetrics {
         double worst = -1;
         for (Map.Entry<Double, Double> e : up.entrySet()) {
             Double d = down.get(e.getKey());
-            if (d != null && Math.abs(e.getValue() - d) > worst) {
+            if (d != null && clearlyLarger(Math.abs(e.getValue() - d), worst)) {
                 worst = Math.abs(e.getValue() - d);
                 worstInput = e.getKey();
             }
@@ -371,18 +371,45 @@ final class StaticMetrics {
         return Optional.empty();
     }
 
-    /** The worst verdict decides; among equals, the lowest probability of conformance, then the first. */
+    /**
+     * Larger beyond rounding (10⁻⁹ relative): equal deviations at several set points keep the first, whatever
+     * the last bits of their sums say.
+     */
+    private static boolean clearlyLarger(double value, double than) {
+        return value > than + 1e-9 * Math.abs(than);
+    }
+
+    /**
+     * The deciding point: the worst verdict; among equal verdicts the lowest probability of conformance; among
+     * equal probabilities (p_c rounds to 1 well inside a tolerance) the smallest margin to a tolerance limit,
+     * relative to the tolerance's half-width; then the first.
+     */
     static int decidingPoint(List<PointCheck> checks) {
         int best = 0;
         for (int i = 1; i < checks.size(); i++) {
             PointCheck c = checks.get(i);
             PointCheck b = checks.get(best);
             int byVerdict = c.verdict().compareTo(b.verdict());
-            if (byVerdict > 0 || (byVerdict == 0 && c.probabilityOfConformance() < b.probabilityOfConformance())) {
+            if (byVerdict > 0 || (byVerdict == 0 && (c.probabilityOfConformance() < b.probabilityOfConformance()
+                    || (c.probabilityOfConformance() == b.probabilityOfConformance()
+                            && relativeMargin(c) < relativeMargin(b) - 1e-12)))) {
                 best = i;
             }
         }
         return best;
+    }
+
+    /** The distance from the error to the nearer tolerance limit (negative outside), over the half-width. */
+    private static double relativeMargin(PointCheck p) {
+        Tolerance t = p.tolerance();
+        double margin = Double.POSITIVE_INFINITY;
+        if (t.upper().isPresent()) {
+            margin = Math.min(margin, t.upper().getAsDouble() - p.error());
+        }
+        if (t.lower().isPresent()) {
+            margin = Math.min(margin, p.error() - t.lower().getAsDouble());
+        }
+        return t.width().isPresent() ? margin / (t.width().getAsDouble() / 2) : margin;
     }
 
     private String describe(PointCheck p) {
