@@ -86,8 +86,8 @@ final class BudgetLines {
         }
         Environment e = environment.get();
         if (Double.isNaN(gainBase) && Double.isNaN(zeroBase)) {
-            return List.of(none("environment: a temperature effect that stays the same throughout the test does not change the "
-                    + metricLabel + ", no contribution"));
+            return List.of(none("environment: a temperature effect that stays the same throughout the test does not"
+                    + " change the " + metricLabel + ", no contribution"));
         }
         double dt = Math.abs(e.temperatureDeviationC());
         List<UncertaintyContribution> lines = new ArrayList<>();
