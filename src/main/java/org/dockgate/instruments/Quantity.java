@@ -47,9 +47,10 @@ public enum Quantity {
     }
 
     /**
-     * The quantity named by its label or constant name, ignoring case and surrounding blanks.
+     * The quantity named by its label, its constant name or its {@link #dimensionName()} (so a caller may
+     * pass {@code Units.dimensionName(unit)}), ignoring case and surrounding blanks.
      *
-     * @param name e.g. "pressure" or "PRESSURE"
+     * @param name e.g. "pressure", "PRESSURE", "electric current"
      * @return the quantity
      * @throws IllegalArgumentException when the name is empty or not one of the known quantities
      */
@@ -58,9 +59,15 @@ public enum Quantity {
             throw new IllegalArgumentException("Choose what the instrument measures or generates (" + known() + ").");
         }
         String wanted = name.strip().toLowerCase(Locale.ROOT);
-        return Arrays.stream(values()).filter(q -> q.label.equals(wanted)).findFirst()
+        return Arrays.stream(values()).filter(q -> q.label.equals(wanted) || q.name().equalsIgnoreCase(wanted)
+                        || q.dimensionName().equals(wanted)).findFirst()
                 .orElseThrow(() -> new IllegalArgumentException(
                         "Unknown quantity '" + name.strip() + "': use one of " + known() + "."));
+    }
+
+    /** @return the name {@link Units#dimensionName} gives this quantity's dimension, e.g. "electric current" */
+    public String dimensionName() {
+        return Units.dimensionName(referenceUnit);
     }
 
     /**

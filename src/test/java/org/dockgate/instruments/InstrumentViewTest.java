@@ -149,5 +149,10 @@ class InstrumentViewTest {
         assertThatThrownBy(() -> Quantity.of("presure")).isInstanceOf(IllegalArgumentException.class)
                 .hasMessageStartingWith("Unknown quantity 'presure': use one of pressure, acceleration");
         assertThat(Quantity.of(" Pressure ")).isEqualTo(Quantity.PRESSURE);
+        assertThat(Quantity.of(Units.dimensionName("mA"))).isEqualTo(Quantity.CURRENT);
+        assertThat(Quantity.of(Units.dimensionName("mV/V"))).isEqualTo(Quantity.RATIO);
+        for (Quantity q : Quantity.values()) {
+            assertThat(Quantity.of(Units.dimensionName(q.referenceUnit()))).as(q.label()).isEqualTo(q);
+        }
     }
 }
