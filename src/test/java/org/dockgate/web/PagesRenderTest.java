@@ -40,4 +40,17 @@ class PagesRenderTest {
         mvc.perform(get(resolved).with(user("admin").roles("ENGINEER", "ADMIN", "AUDITOR", "SUPERVISOR")))
                 .andExpect(status().isOk()).andExpect(content().string(containsString("</html>")));
     }
+
+    @org.junit.jupiter.api.Test
+    void anApprovedProcedurePrintsAsPdf() throws Exception {
+        var model = catalogue.modelByPartNumber("PX-4410").orElseThrow();
+        var procedure = procedures.approvedFor(model.id()).orElseThrow();
+        byte[] pdf = mvc.perform(get("/procedures/" + procedure.id() + "/pdf").with(user("operator").roles("OPERATOR")))
+                .andExpect(status().isOk()).andReturn().getResponse().getContentAsByteArray();
+        try (var doc = org.apache.pdfbox.Loader.loadPDF(pdf)) {
+            String text = new org.apache.pdfbox.text.PDFTextStripper().getText(doc);
+            org.assertj.core.api.Assertions.assertThat(text).contains("PX-4410").contains("Guard-banded acceptance")
+                    .contains("safety function");
+        }
+    }
 }

@@ -24,9 +24,23 @@ class ProceduresController {
 
     private final ProcedureService procedures;
     private final CatalogueService catalogue;
-    ProceduresController(ProcedureService procedures, CatalogueService catalogue) {
+    private final org.dockgate.procedures.ProcedureDocuments documents;
+
+    ProceduresController(ProcedureService procedures, CatalogueService catalogue,
+                         org.dockgate.procedures.ProcedureDocuments documents) {
         this.procedures = procedures;
         this.catalogue = catalogue;
+        this.documents = documents;
+    }
+
+    @GetMapping("/{id}/pdf")
+    org.springframework.http.ResponseEntity<byte[]> pdf(@PathVariable long id) {
+        var revision = procedures.revision(id)
+                .orElseThrow(() -> new IllegalArgumentException("There is no procedure revision " + id + "."));
+        return org.springframework.http.ResponseEntity.ok().contentType(org.springframework.http.MediaType.APPLICATION_PDF)
+                .header(org.springframework.http.HttpHeaders.CONTENT_DISPOSITION, "inline; filename=\""
+                        + revision.partNumber() + "-procedure-rev" + revision.revisionNo() + ".pdf\"")
+                .body(documents.render(revision));
     }
 
     @GetMapping
