@@ -1,0 +1,84 @@
+package org.dockgate.receiving;
+
+import static org.hamcrest.Matchers.containsString;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.catalogue.SupplierStatus;
+import org.dockgate.core.sampling.Aql;
+import org.dockgate.receiving.ReceivingTestSupport.Pair;
+import org.dockgate.receiving.ReceivingTestSupport.TestProcedures;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.context.annotation.Import;
+import org.springframework.http.MediaType;
+import org.springframework.security.test.context.support.WithMockUser;
+import org.springframework.test.web.servlet.MockMvc;
+
+/** Roles on the receiving pages and API, and refusals as problem documents. */
+@SpringBootTest
+@AutoConfigureMockMvc
+@Import(ReceivingTestSupport.Config.class)
+@WithMockUser(username = "engineer", roles = "ENGINEER")
+class ReceivingWebTest {
+
+    @Autowired MockMvc mvc;
+    @Autowired CatalogueService catalogue;
+    @Autowired TestProcedures procedures;
+
+    private String body(Pair pair, int quantity, String serials) {
+        return "{\"purchaseOrder\":\"PO-W\",\"deliveryNote\":\"DN-W\",\"receivedOn\":\"2026-01-05\",\"supplierId\":"
+                + pair.supplier().id() + ",\"lots\":[{\"modelId\":" + pair.model().id() + ",\"quantity\":" + quantity
+                + ",\"serials\":" + serials + "}]}";
+    }
+
+    @Test
+    void everyReceivingRoleReadsAndOnlyOperatorsAndEngineersReceive() throws Exception {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        for (String role : new String[] {"OPERATOR", "ENGINEER", "SUPERVISOR", "AUDITOR"}) {
+            mvc.perform(get("/receiving").with(user("u").roles(role))).andExpect(status().isOk());
+            mvc.perform(get("/api/v1/lots").with(user("u").roles(role))).andExpect(status().isOk());
+        }
+        mvc.perform(post("/api/v1/receipts").with(user("auditor").roles("AUDITOR")).with(csrf())
+                .contentType(MediaType.APPLICATION_JSON).content(body(pair, 2, "[\"W1\",\"W2\"]")))
+                .andExpect(status().isForbidden());
+        String created = mvc.perform(post("/api/v1/receipts").with(user("operator").roles("OPERATOR")).with(csrf())
+                .contentType(MediaType.APPLICATION_JSON).content(body(pair, 2, "[\"W1\",\"W2\"]")))
+                .andExpect(status().isCreated()).andExpect(jsonPath("$.lots[0].state").value("AWAITING_MEASUREMENT"))
+                .andReturn().getResponse().getContentAsString();
+        long lotId = Long.parseLong(created.replaceAll("(?s).*\"lots\":\\[\\{\"id\":(\\d+).*", "$1"));
+        mvc.perform(get("/receiving/lots/" + lotId).with(user("auditor").roles("AUDITOR")))
+                .andExpect(status().isOk()).andExpect(content().string(containsString("sample re-drawn from seed: identical")));
+        mvc.perform(get("/api/v1/lots/" + lotId).with(user("auditor").roles("AUDITOR")))
+                .andExpect(status().isOk()).andExpect(jsonPath("$.sampledSerials").isArray());
+        mvc.perform(post("/receiving/switching/1/lift").with(user("operator").roles("OPERATOR")).with(csrf())
+                .param("reason", "x").param("version", "0")).andExpect(status().isForbidden());
+        mvc.perform(get("/receiving/new").with(user("operator").roles("OPERATOR")))
+                .andExpect(status().isOk()).andExpect(content().string(containsString("autofocus")));
+    }
+
+    @Test
+    void badInputIsABadRequestProblemDocument() throws Exception {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        mvc.perform(post("/api/v1/receipts").with(csrf()).contentType(MediaType.APPLICATION_JSON)
+                .content(body(pair, 3, "[\"V1\",\"V2\"]")))
+                .andExpect(status().isBadRequest())
+                .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
+                .andExpect(jsonPath("$.detail").value("2 serials for a quantity of 3."));
+        mvc.perform(post("/api/v1/receipts").with(csrf()).contentType(MediaType.APPLICATION_JSON)
+                .content(body(pair, 2, "[\"V1\",\"V1\"]")))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.detail").value(containsString("V1 (lines 1, 2)")));
+        mvc.perform(post("/api/v1/receipts").with(csrf()).contentType(MediaType.APPLICATION_JSON).content("{\"lots\":"))
+                .andExpect(status().isBadRequest())
+                .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON));
+    }
+}
