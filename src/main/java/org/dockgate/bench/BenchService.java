@@ -1,0 +1,577 @@
+package org.dockgate.bench;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.sql.Types;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalInt;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.concurrent.ConcurrentHashMap;
+import org.dockgate.audit.AuditEvent;
+import org.dockgate.audit.AuditEvent.FieldChange;
+import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.core.procedure.SensorSpecification;
+import org.dockgate.core.quantity.Units;
+import org.dockgate.core.series.Direction;
+import org.dockgate.instruments.InstrumentService;
+import org.dockgate.instruments.InstrumentView;
+import org.dockgate.procedures.ApprovedProcedure;
+import org.dockgate.procedures.ProcedureService;
+import org.springframework.beans.factory.ObjectProvider;
+import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.dao.DuplicateKeyException;
+import org.springframework.jdbc.core.JdbcTemplate;
+import org.springframework.jdbc.core.RowMapper;
+import org.springframework.jdbc.support.GeneratedKeyHolder;
+import org.springframework.orm.ObjectOptimisticLockingFailureException;
+import org.springframework.security.core.Authentication;
+import org.springframework.security.core.context.SecurityContextHolder;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.PlatformTransactionManager;
+import org.springframework.transaction.support.TransactionTemplate;
+
+/**
+ * The bench: readings recorded point by point or in batches, corrections, environmental conditions,
+ * and what evaluation reads back. Readings are append-only (the database refuses changes too); a
+ * correction is a new reading that supersedes an old one. Each change publishes an audit event in
+ * its transaction.
+ *
+ * <p>Transactions are run here with a {@link TransactionTemplate} rather than annotations, because a
+ * repeated submit is recognised after its transaction failed on the unique client token (PostgreSQL
+ * cannot go on inside a failed transaction).
+ */
+@Service
+public class BenchService {
+
+    /** Audit entity types. */
+    public static final String READING = "READING";
+    public static final String LOT = "LOT";
+
+    static final String COLUMNS = "id, lot_id, serial, test, point, direction, cycle_no, slot_no, revision_no,"
+            + " reading_value, unit, entered_value, entered_unit, instrument, recorded_by, recorded_at, client_token,"
+            + " supersedes_id, correction_reason, import_id,"
+            + " (select s.id from bench_reading s where s.supersedes_id = r.id) as superseded_by";
+
+    static final String INSERT = "insert into bench_reading (lot_id, serial, test, point, direction, cycle_no,"
+            + " slot_no, revision_no, reading_value, unit, entered_value, entered_unit, instrument, recorded_by,"
+            + " recorded_at, client_token, supersedes_id, correction_reason, import_id)"
+            + " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+
+    private static final int MAX_TOKEN = 80;
+
+    private final JdbcTemplate jdbc;
+    private final TransactionTemplate tx;
+    private final ObjectProvider<LotSource> lots;
+    private final ProcedureService procedures;
+    private final CatalogueService catalogue;
+    private final InstrumentService instruments;
+    private final ApplicationEventPublisher events;
+    private final Clock clock;
+    private final Map<Long, BenchPlan> plans = new ConcurrentHashMap<>();
+
+    BenchService(JdbcTemplate jdbc, PlatformTransactionManager transactions, ObjectProvider<LotSource> lots,
+                 ProcedureService procedures, CatalogueService catalogue, InstrumentService instruments,
+                 ApplicationEventPublisher events, Clock clock) {
+        this.jdbc = jdbc;
+        this.tx = new TransactionTemplate(transactions);
+        this.lots = lots;
+        this.procedures = procedures;
+        this.catalogue = catalogue;
+        this.instruments = instruments;
+        this.events = events;
+        this.clock = clock;
+    }
+
+    // ---- lots and plans
+
+    /** @return the lot as the bench sees it, if there is one */
+    public Optional<BenchLot> lot(long lotId) {
+        LotSource source = lots.getIfAvailable();
+        return source == null ? Optional.empty() : source.lot(lotId);
+    }
+
+    /** @return the lots waiting for measurement */
+    public List<BenchLot> lotsAwaitingMeasurement() {
+        LotSource source = lots.getIfAvailable();
+        return source == null ? List.of() : source.awaitingMeasurement();
+    }
+
+    /**
+     * What the lot's procedure revision expects from each unit, in order. Procedure revisions never
+     * change, so plans are kept once built.
+     *
+     * @param procedureRevisionId the approved revision
+     * @return the plan
+     * @throws IllegalArgumentException when there is no such revision
+     */
+    public BenchPlan plan(long procedureRevisionId) {
+        return plans.computeIfAbsent(procedureRevisionId, id -> {
+            ApprovedProcedure p = procedures.revision(id).orElseThrow(
+                    () -> new IllegalArgumentException("There is no approved procedure revision " + id + "."));
+            SensorSpecification spec = catalogue.revision(p.specificationRevisionId()).orElseThrow(
+                    () -> new IllegalArgumentException("Procedure " + p.label() + " names specification revision "
+                            + p.specificationRevisionId() + ", which does not exist.")).specification();
+            return BenchPlan.of(id, p.label(), p.content(), spec.outputUnit(), spec.kind().inputDimension());
+        });
+    }
+
+    /** The lot's plan. */
+    public BenchPlan planFor(BenchLot lot) {
+        return plan(lot.procedureRevisionId());
+    }
+
+    /**
+     * The instruments a technician may choose for the lot today: of the procedure's input quantity, in
+     * calibration, covering the static points.
+     */
+    public List<InstrumentView> selectableInstruments(BenchPlan plan) {
+        if (plan.quantity() == null) {
+            return instruments.all().stream().filter(InstrumentView::selectable).toList();
+        }
+        return instruments.qualifying(plan.quantity(), plan.rangeMin(), plan.rangeMax(), plan.inputUnit());
+    }
+
+    // ---- recording
+
+    /**
+     * Records one reading. A reading whose client token was already used is not stored again: the
+     * saved one is returned.
+     *
+     * @param lotId the lot
+     * @param input the reading
+     * @return the saved reading
+     * @throws IllegalArgumentException when the lot, the unit, the point, the value, the unit or the
+     *                                  instrument is not right (the message names which)
+     * @throws IllegalStateException    when the lot is closed, the instrument is out of calibration today
+     *                                  ({@code InstrumentNotSelectableException}), or the point already has
+     *                                  a reading (someone recorded it meanwhile: correct it instead)
+     */
+    public Reading record(long lotId, NewReading input) {
+        return recordMany(lotId, List.of(input)).get(0);
+    }
+
+    /**
+     * Records several readings in one transaction: all are saved or none. Readings whose client token
+     * was already used are returned as saved.
+     *
+     * @param lotId  the lot
+     * @param inputs the readings
+     * @return the saved readings, in the order given
+     * @throws IllegalArgumentException as {@link #record}, prefixed with the reading's position when more than one
+     * @throws IllegalStateException    as {@link #record}
+     */
+    public List<Reading> recordMany(long lotId, List<NewReading> inputs) {
+        if (inputs == null || inputs.isEmpty()) {
+            throw new IllegalArgumentException("Send at least one reading.");
+        }
+        try {
+            return tx.execute(status -> recordInTransaction(lotId, inputs));
+        } catch (DuplicateKeyException e) {
+            // A concurrent submit of the same tokens won, or someone filled one of these points meanwhile.
+            List<Reading> saved = new ArrayList<>();
+            for (NewReading in : inputs) {
+                Optional<Reading> existing = byToken(token(in.clientToken()));
+                if (existing.isEmpty()) {
+                    throw new IllegalStateException("A reading for one of these points was recorded by someone else"
+                            + " while you were entering it. Reload the unit and correct it if needed; nothing of"
+                            + " this submit was saved.");
+                }
+                saved.add(existing.get());
+            }
+            return saved;
+        }
+    }
+
+    private List<Reading> recordInTransaction(long lotId, List<NewReading> inputs) {
+        BenchLot lot = openLot(lotId);
+        BenchPlan plan = planFor(lot);
+        String who = currentUser();
+        Instant now = clock.instant();
+        LocalDate today = LocalDate.ofInstant(now, ZoneOffset.UTC);
+        Map<String, InstrumentView> checked = new java.util.HashMap<>();
+        List<Reading> saved = new ArrayList<>();
+        for (int i = 0; i < inputs.size(); i++) {
+            NewReading in = inputs.get(i);
+            String where = inputs.size() > 1 ? "Reading " + (i + 1) + ": " : "";
+            try {
+                if (in == null) {
+                    throw new IllegalArgumentException("the reading is empty.");
+                }
+                String token = token(in.clientToken());
+                if (token != null) {
+                    Optional<Reading> existing = byToken(token);
+                    if (existing.isPresent()) {
+                        Reading r = existing.get();
+                        if (r.lotId() != lotId || !r.serial().equals(in.serial() == null ? "" : in.serial().strip())) {
+                            throw new IllegalArgumentException("the client token " + token
+                                    + " was already used for another reading.");
+                        }
+                        saved.add(r);
+                        continue;
+                    }
+                }
+                String serial = requireSampled(lot, in.serial());
+                if (in.point() == null) {
+                    throw new IllegalArgumentException("'point' is missing.");
+                }
+                ExpectedReading slot = plan.slotOf(in.test(), in.point(), in.direction(), in.cycle());
+                double entered = finite(in.value(), "value");
+                String enteredUnit = in.unit() == null || in.unit().isBlank() ? plan.outputUnit() : in.unit().strip();
+                double value = toOutputUnit(entered, enteredUnit, plan.outputUnit());
+                String instrument = in.instrument() == null ? null : in.instrument().strip();
+                if (instrument == null || instrument.isEmpty()) {
+                    throw new IllegalArgumentException("'instrument' is missing: name the reference instrument used.");
+                }
+                InstrumentView iv = checked.get(instrument);
+                if (iv == null) {
+                    iv = instruments.requireSelectable(instrument, today);
+                    requireFits(plan, iv);
+                    checked.put(instrument, iv);
+                }
+                long id = insert(lotId, serial, slot, 0, value, plan.outputUnit(), entered, enteredUnit, iv.identifier(),
+                        who, now, token, null, null);
+                events.publishEvent(AuditEvent.of(READING, id, "RECORD", lot.label() + ", " + serial + ", "
+                        + plan.describe(slot.slot()) + ": " + Plain.number(value) + " " + plan.outputUnit()
+                        + (enteredUnit.equals(plan.outputUnit()) ? "" : " (entered " + Plain.number(entered) + " "
+                        + enteredUnit + ")") + " with " + iv.identifier()));
+                saved.add(reading(id).orElseThrow());
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException(where + e.getMessage(), e);
+            }
+        }
+        return saved;
+    }
+
+    /**
+     * Corrects a reading: saves a new reading at the same point that supersedes it, with the reason and
+     * the signed-in user as author. The original stays, marked superseded.
+     *
+     * @param readingId the reading to correct (the current one at its point)
+     * @param newValue  the right value
+     * @param unit      its unit (null: the output unit)
+     * @param reason    why, required
+     * @return the correcting reading
+     * @throws IllegalArgumentException when the reading does not exist, the value or unit is wrong, or the reason is missing
+     * @throws ObjectOptimisticLockingFailureException when the reading was corrected meanwhile ("this changed while you were editing")
+     * @throws IllegalStateException when the lot is no longer awaiting measurement
+     */
+    public Reading correct(long readingId, Double newValue, String unit, String reason) {
+        try {
+            return tx.execute(status -> {
+                Reading old = reading(readingId).orElseThrow(
+                        () -> new IllegalArgumentException("There is no reading " + readingId + "."));
+                if (old.superseded()) {
+                    throw new ObjectOptimisticLockingFailureException(Reading.class, readingId);
+                }
+                if (reason == null || reason.isBlank()) {
+                    throw new IllegalArgumentException("A correction needs its reason.");
+                }
+                BenchLot lot = openLot(old.lotId());
+                BenchPlan plan = planFor(lot);
+                double entered = finite(newValue, "value");
+                String enteredUnit = unit == null || unit.isBlank() ? plan.outputUnit() : unit.strip();
+                double value = toOutputUnit(entered, enteredUnit, plan.outputUnit());
+                int revision = jdbc.queryForObject("select max(revision_no) from bench_reading where lot_id = ?"
+                        + " and serial = ? and slot_no = ?", Integer.class, old.lotId(), old.serial(), old.slot()) + 1;
+                long id = insert(old.lotId(), old.serial(), plan.expected(old.slot()), revision, value, plan.outputUnit(),
+                        entered, enteredUnit, old.instrument(), currentUser(), clock.instant(), null, old.id(),
+                        reason.strip());
+                events.publishEvent(AuditEvent.withReason(READING, id, "CORRECT", lot.label() + ", " + old.serial()
+                                + ", " + plan.describe(old.slot()) + ": reading " + old.id() + " corrected by reading " + id,
+                        reason.strip()).withChanges(List.of(FieldChange.of("value",
+                        Plain.number(old.value()) + " " + old.unit(), Plain.number(value) + " " + plan.outputUnit()))));
+                return reading(id).orElseThrow();
+            });
+        } catch (DuplicateKeyException e) {
+            throw new ObjectOptimisticLockingFailureException(Reading.class, readingId);
+        }
+    }
+
+    /**
+     * Records the environmental conditions of a unit's session (append-only; the latest applies).
+     *
+     * @param lotId    the lot
+     * @param serial   a sampled unit
+     * @param ambientC ambient temperature in °C, −50 to 100
+     * @param rhPct    relative humidity in %, 0 to 100
+     * @return the saved conditions
+     * @throws IllegalArgumentException when a value is missing or out of range, or the unit is not sampled
+     */
+    public Conditions recordConditions(long lotId, String serial, Double ambientC, Double rhPct) {
+        return tx.execute(status -> {
+            BenchLot lot = openLot(lotId);
+            String unit = requireSampled(lot, serial);
+            double t = finite(ambientC, "ambient temperature");
+            double h = finite(rhPct, "relative humidity");
+            if (t < -50 || t > 100) {
+                throw new IllegalArgumentException("An ambient temperature of " + Plain.number(t)
+                        + " °C is not plausible at a bench (−50 to 100 °C).");
+            }
+            if (h < 0 || h > 100) {
+                throw new IllegalArgumentException("Relative humidity is 0 to 100 %, got " + Plain.number(h) + ".");
+            }
+            Instant now = clock.instant();
+            GeneratedKeyHolder keys = new GeneratedKeyHolder();
+            jdbc.update(c -> {
+                PreparedStatement ps = c.prepareStatement("insert into bench_conditions (lot_id, serial, ambient_c,"
+                        + " relative_humidity_percent, recorded_by, recorded_at) values (?, ?, ?, ?, ?, ?)", new String[] {"id"});
+                ps.setLong(1, lotId);
+                ps.setString(2, unit);
+                ps.setDouble(3, t);
+                ps.setDouble(4, h);
+                ps.setString(5, currentUser());
+                ps.setObject(6, OffsetDateTime.ofInstant(now, ZoneOffset.UTC));
+                return ps;
+            }, keys);
+            long id = keys.getKey().longValue();
+            events.publishEvent(AuditEvent.of(LOT, lotId, "CONDITIONS", lot.label() + ", " + unit + ": ambient "
+                    + Plain.number(t) + " °C, RH " + Plain.number(h) + " %"));
+            return conditions(lotId, unit).orElseThrow();
+        });
+    }
+
+    // ---- reading back (evaluation)
+
+    /** The readings that count for a unit: superseded ones excluded, in the procedure's order. */
+    public List<Reading> currentReadings(long lotId, String serial) {
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where lot_id = ? and serial = ?"
+                + " and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)"
+                + " order by slot_no, revision_no", MAPPER, lotId, serial);
+    }
+
+    /** Every reading of a unit, corrections and the readings they superseded included, in the procedure's order. */
+    public List<Reading> history(long lotId, String serial) {
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where lot_id = ? and serial = ?"
+                + " order by slot_no, revision_no", MAPPER, lotId, serial);
+    }
+
+    /** The latest conditions recorded for a unit, if any. */
+    public Optional<Conditions> conditions(long lotId, String serial) {
+        return jdbc.query("select id, lot_id, serial, ambient_c, relative_humidity_percent, recorded_by, recorded_at"
+                        + " from bench_conditions where lot_id = ? and serial = ? order by id desc",
+                (rs, n) -> new Conditions(rs.getLong(1), rs.getLong(2), rs.getString(3), rs.getDouble(4), rs.getDouble(5),
+                        rs.getString(6), rs.getObject(7, OffsetDateTime.class).toInstant()), lotId, serial)
+                .stream().findFirst();
+    }
+
+    /** The reference instruments of a unit's current readings. */
+    public Set<String> instrumentsUsed(long lotId, String serial) {
+        return new TreeSet<>(jdbc.queryForList("select distinct instrument from bench_reading r where lot_id = ?"
+                + " and serial = ? and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)",
+                String.class, lotId, serial));
+    }
+
+    /** Everyone who recorded or corrected a reading of the lot (for separation of duties). */
+    public Set<String> operators(long lotId) {
+        return new TreeSet<>(jdbc.queryForList("select distinct recorded_by from bench_reading where lot_id = ?",
+                String.class, lotId));
+    }
+
+    /** Number of points of each unit that have a reading, by serial. */
+    public Map<String, Integer> progress(long lotId) {
+        Map<String, Integer> done = new java.util.HashMap<>();
+        jdbc.query("select serial, count(distinct slot_no) from bench_reading where lot_id = ? group by serial",
+                rs -> {
+                    done.put(rs.getString(1), rs.getInt(2));
+                }, lotId);
+        return done;
+    }
+
+    /** One reading by its number. */
+    public Optional<Reading> reading(long id) {
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where id = ?", MAPPER, id).stream().findFirst();
+    }
+
+    Optional<Reading> byToken(String token) {
+        if (token == null) {
+            return Optional.empty();
+        }
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where client_token = ?", MAPPER, token)
+                .stream().findFirst();
+    }
+
+    // ---- shared with the import
+
+    BenchLot openLot(long lotId) {
+        BenchLot lot = lot(lotId).orElseThrow(() -> new IllegalArgumentException("There is no lot " + lotId + "."));
+        if (!lot.awaitingMeasurement()) {
+            throw new IllegalStateException(lot.label() + " is no longer awaiting measurement; its readings are closed.");
+        }
+        return lot;
+    }
+
+    static String requireSampled(BenchLot lot, String serial) {
+        String s = serial == null ? "" : serial.strip();
+        if (s.isEmpty()) {
+            throw new IllegalArgumentException("'serial' is missing.");
+        }
+        if (!lot.sampledSerials().contains(s)) {
+            throw new IllegalArgumentException(s + " is not one of the units sampled from " + lot.label() + ".");
+        }
+        return s;
+    }
+
+    static void requireFits(BenchPlan plan, InstrumentView instrument) {
+        if (plan.quantity() != null && !plan.quantity().equals(instrument.quantity())) {
+            throw new IllegalArgumentException(instrument.identifier() + " measures " + instrument.quantity()
+                    + "; " + plan.procedureLabel() + " needs a " + plan.quantity() + " reference.");
+        }
+    }
+
+    InstrumentView requireInstrument(BenchPlan plan, String identifier) {
+        if (identifier == null || identifier.isBlank()) {
+            throw new IllegalArgumentException("Name the reference instrument used.");
+        }
+        InstrumentView iv = instruments.requireSelectable(identifier.strip(), LocalDate.ofInstant(clock.instant(), ZoneOffset.UTC));
+        requireFits(plan, iv);
+        return iv;
+    }
+
+    static double toOutputUnit(double entered, String unit, String outputUnit) {
+        try {
+            return Units.convert(entered, unit, outputUnit);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("The unit '" + unit + "' cannot be converted to the procedure's output"
+                    + " unit " + outputUnit + ".", e);
+        }
+    }
+
+    static double finite(Double value, String field) {
+        if (value == null) {
+            throw new IllegalArgumentException("'" + field + "' is missing.");
+        }
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("'" + field + "' must be a finite number.");
+        }
+        return value;
+    }
+
+    private static String token(String raw) {
+        if (raw == null || raw.isBlank()) {
+            return null;
+        }
+        String t = raw.strip();
+        if (t.length() > MAX_TOKEN) {
+            throw new IllegalArgumentException("The client token is longer than " + MAX_TOKEN + " characters.");
+        }
+        return t;
+    }
+
+    static String currentUser() {
+        Authentication auth = SecurityContextHolder.getContext().getAuthentication();
+        return auth == null || auth.getName() == null ? "system" : auth.getName();
+    }
+
+    static Object[] row(long lotId, String serial, ExpectedReading slot, int revision, double value, String unit,
+                        double entered, String enteredUnit, String instrument, String who, Instant at, String token,
+                        Long supersedes, String reason, Long importId) {
+        return new Object[] {lotId, serial, slot.test().name(), slot.point(),
+            slot.direction().map(Direction::name).orElse("NONE"), slot.cycle().orElse(0), slot.slot(), revision, value,
+            unit, entered, enteredUnit, instrument, who, OffsetDateTime.ofInstant(at, ZoneOffset.UTC), token, supersedes,
+            reason, importId};
+    }
+
+    /** Binds a row of {@link #row} with explicit types, so nulls need no metadata round trip. */
+    static void bind(PreparedStatement ps, Object[] v) throws SQLException {
+        ps.setLong(1, (Long) v[0]);
+        ps.setString(2, (String) v[1]);
+        ps.setString(3, (String) v[2]);
+        ps.setDouble(4, (Double) v[3]);
+        ps.setString(5, (String) v[4]);
+        ps.setInt(6, (Integer) v[5]);
+        ps.setInt(7, (Integer) v[6]);
+        ps.setInt(8, (Integer) v[7]);
+        ps.setDouble(9, (Double) v[8]);
+        ps.setString(10, (String) v[9]);
+        ps.setDouble(11, (Double) v[10]);
+        ps.setString(12, (String) v[11]);
+        ps.setString(13, (String) v[12]);
+        ps.setString(14, (String) v[13]);
+        ps.setObject(15, v[14]);
+        if (v[15] == null) {
+            ps.setNull(16, Types.VARCHAR);
+        } else {
+            ps.setString(16, (String) v[15]);
+        }
+        if (v[16] == null) {
+            ps.setNull(17, Types.BIGINT);
+        } else {
+            ps.setLong(17, (Long) v[16]);
+        }
+        if (v[17] == null) {
+            ps.setNull(18, Types.VARCHAR);
+        } else {
+            ps.setString(18, (String) v[17]);
+        }
+        if (v[18] == null) {
+            ps.setNull(19, Types.BIGINT);
+        } else {
+            ps.setLong(19, (Long) v[18]);
+        }
+    }
+
+    private long insert(long lotId, String serial, ExpectedReading slot, int revision, double value, String unit,
+                        double entered, String enteredUnit, String instrument, String who, Instant at, String token,
+                        Long supersedes, String reason) {
+        Object[] values = row(lotId, serial, slot, revision, value, unit, entered, enteredUnit, instrument, who, at,
+                token, supersedes, reason, null);
+        GeneratedKeyHolder keys = new GeneratedKeyHolder();
+        jdbc.update(c -> {
+            PreparedStatement ps = c.prepareStatement(INSERT, new String[] {"id"});
+            bind(ps, values);
+            return ps;
+        }, keys);
+        return keys.getKey().longValue();
+    }
+
+    static final RowMapper<Reading> MAPPER = BenchService::map;
+
+    private static Reading map(ResultSet rs, int n) throws SQLException {
+        String direction = rs.getString("direction");
+        int cycle = rs.getInt("cycle_no");
+        long supersedes = rs.getLong("supersedes_id");
+        boolean hasSupersedes = !rs.wasNull();
+        long supersededBy = rs.getLong("superseded_by");
+        boolean hasSupersededBy = !rs.wasNull();
+        long importId = rs.getLong("import_id");
+        boolean hasImport = !rs.wasNull();
+        return new Reading(rs.getLong("id"), rs.getLong("lot_id"), rs.getString("serial"),
+                ReadingTest.valueOf(rs.getString("test")), rs.getDouble("point"),
+                "NONE".equals(direction) ? Optional.empty() : Optional.of(Direction.valueOf(direction)),
+                cycle == 0 ? OptionalInt.empty() : OptionalInt.of(cycle), rs.getInt("slot_no"),
+                rs.getDouble("reading_value"), rs.getString("unit"), rs.getDouble("entered_value"),
+                rs.getString("entered_unit"), rs.getString("instrument"), rs.getString("recorded_by"),
+                rs.getObject("recorded_at", OffsetDateTime.class).toInstant(),
+                Optional.ofNullable(rs.getString("client_token")),
+                hasSupersedes ? Optional.of(supersedes) : Optional.empty(),
+                Optional.ofNullable(rs.getString("correction_reason")),
+                hasSupersededBy ? Optional.of(supersededBy) : Optional.empty(),
+                hasImport ? Optional.of(importId) : Optional.empty());
+    }
+
+    JdbcTemplate jdbc() {
+        return jdbc;
+    }
+
+    TransactionTemplate transactions() {
+        return tx;
+    }
+
+    ApplicationEventPublisher events() {
+        return events;
+    }
+
+    Clock clock() {
+        return clock;
+    }
+}
