@@ -42,6 +42,11 @@ public class ApiExceptionHandler {
         return problem(HttpStatus.UNPROCESSABLE_CONTENT, e.getMessage());
     }
 
+    @ExceptionHandler(NotFoundException.class)
+    ResponseEntity<ProblemDetail> notFound(NotFoundException e) {
+        return problem(HttpStatus.NOT_FOUND, e.getMessage());
+    }
+
     @ExceptionHandler(IllegalArgumentException.class)
     ResponseEntity<ProblemDetail> malformed(IllegalArgumentException e) {
         return problem(HttpStatus.BAD_REQUEST, e.getMessage());

@@ -29,6 +29,11 @@ class PageExceptionHandler {
         return page(HttpStatus.BAD_REQUEST, "error/400", e.getMessage());
     }
 
+    @ExceptionHandler(NotFoundException.class)
+    ModelAndView notFound(NotFoundException e) {
+        return page(HttpStatus.NOT_FOUND, "error/404", e.getMessage());
+    }
+
     @ExceptionHandler(org.springframework.web.method.annotation.MethodArgumentTypeMismatchException.class)
     ModelAndView mismatch(Exception e) {
         return page(HttpStatus.NOT_FOUND, "error/404", null);

@@ -51,7 +51,7 @@ class CatalogueApiController {
     @GetMapping("/api/v1/sensor-models/{id}")
     @Operation(summary = "One sensor model with its latest specification revision")
     ResponseEntity<SensorModelView> one(@PathVariable long id) {
-        return ResponseEntity.of(catalogue.model(id));
+        return ResponseEntity.ok(catalogue.model(id).orElseThrow(org.dockgate.web.NotFoundException.of("There is no sensor model " + id + ".")));
     }
 
     @GetMapping("/api/v1/sensor-models/{id}/revisions")

@@ -83,7 +83,7 @@ class CatalogueController {
 
     @GetMapping("/{id}")
     String detail(@PathVariable long id, Model model) {
-        var found = catalogue.model(id).orElseThrow(() -> new IllegalArgumentException("There is no sensor model " + id + "."));
+        var found = catalogue.model(id).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no sensor model " + id + "."));
         model.addAttribute("sensorModel", found);
         model.addAttribute("revisions", catalogue.revisions(id));
         return "catalogue/detail";
@@ -91,7 +91,7 @@ class CatalogueController {
 
     @GetMapping("/{id}/revise")
     String reviseForm(@PathVariable long id, Model model) {
-        var found = catalogue.model(id).orElseThrow(() -> new IllegalArgumentException("There is no sensor model " + id + "."));
+        var found = catalogue.model(id).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no sensor model " + id + "."));
         model.addAttribute("form", SpecificationForm.of(found.partNumber(), found.name(), found.measurand(),
                 found.outputKind(), found.excitation(), found.suppliers().stream().map(SupplierView::code).toList(),
                 found.latest().specification(), found.latest().revisionNo()));
@@ -103,7 +103,7 @@ class CatalogueController {
     @PostMapping("/{id}/revise")
     String revise(@PathVariable long id, @ModelAttribute("form") SpecificationForm form, Model model,
                   RedirectAttributes redirect) {
-        var found = catalogue.model(id).orElseThrow(() -> new IllegalArgumentException("There is no sensor model " + id + "."));
+        var found = catalogue.model(id).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no sensor model " + id + "."));
         var problems = new SpecificationForm.Problems();
         SensorSpecification spec = form.toSpecification(problems);
         if (spec != null && !problems.any()) {

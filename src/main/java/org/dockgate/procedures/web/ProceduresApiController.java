@@ -59,6 +59,6 @@ class ProceduresApiController {
     @GetMapping("/api/v1/procedures/{id}")
     @Operation(summary = "One approved procedure revision")
     ResponseEntity<ApprovedProcedure> one(@PathVariable long id) {
-        return ResponseEntity.of(procedures.revision(id));
+        return ResponseEntity.ok(procedures.revision(id).orElseThrow(org.dockgate.web.NotFoundException.of("There is no procedure revision " + id + ".")));
     }
 }

@@ -36,7 +36,7 @@ class ProceduresController {
     @GetMapping("/{id}/pdf")
     org.springframework.http.ResponseEntity<byte[]> pdf(@PathVariable long id) {
         var revision = procedures.revision(id)
-                .orElseThrow(() -> new IllegalArgumentException("There is no procedure revision " + id + "."));
+                .orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no procedure revision " + id + "."));
         return org.springframework.http.ResponseEntity.ok().contentType(org.springframework.http.MediaType.APPLICATION_PDF)
                 .header(org.springframework.http.HttpHeaders.CONTENT_DISPOSITION, "inline; filename=\""
                         + revision.partNumber() + "-procedure-rev" + revision.revisionNo() + ".pdf\"")
@@ -48,7 +48,7 @@ class ProceduresController {
         var models = catalogue.models(null, null, null);
         page.addAttribute("models", models);
         if (model != null) {
-            var found = catalogue.model(model).orElseThrow(() -> new IllegalArgumentException("There is no sensor model " + model + "."));
+            var found = catalogue.model(model).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no sensor model " + model + "."));
             page.addAttribute("sensorModel", found);
             page.addAttribute("revisions", procedures.revisions(model));
             page.addAttribute("drafts", procedures.openDrafts(model));
@@ -120,7 +120,7 @@ class ProceduresController {
 
     @GetMapping("/{id}")
     String revision(@PathVariable long id, Model page) {
-        var revision = procedures.revision(id).orElseThrow(() -> new IllegalArgumentException("There is no procedure revision " + id + "."));
+        var revision = procedures.revision(id).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no procedure revision " + id + "."));
         page.addAttribute("revision", revision);
         page.addAttribute("proposal", revision.content());
         page.addAttribute("spec", catalogue.revision(revision.specificationRevisionId()).orElseThrow());

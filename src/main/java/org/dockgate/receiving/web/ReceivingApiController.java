@@ -78,6 +78,6 @@ class ReceivingApiController {
     @GetMapping("/api/v1/lots/{id}")
     @Operation(summary = "One lot: serials, plan, drawn sample with its seed, revisions fixed at receipt, state")
     ResponseEntity<LotView> lot(@PathVariable long id) {
-        return ResponseEntity.of(receiving.lot(id));
+        return ResponseEntity.ok(receiving.lot(id).orElseThrow(org.dockgate.web.NotFoundException.of("There is no lot " + id + ".")));
     }
 }
