@@ -60,8 +60,8 @@ final class LabCertificateAuthority {
     static Issued createRoot(String labName, boolean demo, Instant now) {
         KeyPair keys = newKeyPair();
         X500Name name = new X500NameBuilder(BCStyle.INSTANCE)
-                .addRDN(BCStyle.CN, clip(labName, 40) + " signing root" + (demo ? " (DEMO)" : ""))
                 .addRDN(BCStyle.O, clip(labName, 64))
+                .addRDN(BCStyle.CN, clip(labName, 40) + " signing root" + (demo ? " (DEMO)" : ""))
                 .build();
         try {
             JcaX509ExtensionUtils extensions = new JcaX509ExtensionUtils();
@@ -79,7 +79,8 @@ final class LabCertificateAuthority {
     }
 
     /**
-     * A person's signing certificate: subject CN = their display name (O = the lab), random 127-bit serial
+     * A person's signing certificate: subject CN = their display name (O = the lab; RDNs in the
+     * conventional order, most significant first), random 127-bit serial
      * (RFC 5280 4.1.2.2: positive, at most 20 octets; CA/B Forum practice of at least 64 random bits),
      * key usage digitalSignature and nonRepudiation (RFC 5280 4.2.1.3), not a CA.
      */
@@ -87,9 +88,9 @@ final class LabCertificateAuthority {
                               X509Certificate issuer, Instant now, int validityYears) {
         KeyPair keys = newKeyPair();
         X500Name subject = new X500NameBuilder(BCStyle.INSTANCE)
-                .addRDN(BCStyle.CN, clip(displayName, 64))
-                .addRDN(BCStyle.UID, clip(username, 64))
                 .addRDN(BCStyle.O, clip(labName, 64))
+                .addRDN(BCStyle.UID, clip(username, 64))
+                .addRDN(BCStyle.CN, clip(displayName, 64))
                 .build();
         Instant notAfter = now.atOffset(ZoneOffset.UTC).plusYears(validityYears).toInstant();
         if (notAfter.isAfter(issuer.getNotAfter().toInstant())) {
