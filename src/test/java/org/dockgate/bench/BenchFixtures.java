@@ -23,7 +23,7 @@ public final class BenchFixtures {
     private BenchFixtures() {
     }
 
-    /** Lots by id, set by the tests; falls back to the application's own source for other ids. */
+    /** Lots by id, set by the tests. */
     public static final class TestLots implements LotSource {
         final Map<Long, BenchLot> lots = new ConcurrentHashMap<>();
 

@@ -49,15 +49,15 @@ class BenchController {
     }
 
     /** One line of the work queue. */
-    record QueueRow(BenchLot lot, String serial, int done, int total) {
-        boolean complete() {
+    public record QueueRow(BenchLot lot, String serial, int done, int total) {
+        public boolean complete() {
             return done >= total;
         }
     }
 
     /** One expected reading on the unit page, with its current reading if it has one. */
-    record Row(ExpectedReading expected, String label, String token, Reading current) {
-        String inputId() {
+    public record Row(ExpectedReading expected, String label, String token, Reading current) {
+        public String inputId() {
             return "r-" + expected.slot();
         }
     }
