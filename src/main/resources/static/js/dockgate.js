@@ -6,4 +6,9 @@ document.addEventListener('DOMContentLoaded', () => {
       form.querySelectorAll('button[type=submit]').forEach(b => { b.disabled = true; });
     });
   });
+  // A form shown again with errors: the keyboard starts at the first field that needs correcting.
+  const invalid = document.querySelector('form [aria-invalid="true"]');
+  if (invalid) {
+    invalid.focus();
+  }
 });

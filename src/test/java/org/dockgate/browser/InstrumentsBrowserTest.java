@@ -76,6 +76,8 @@ class InstrumentsBrowserTest extends BrowserTestSupport {
         driver.findElement(By.id("description")).sendKeys("Never saved", Keys.ENTER);
         WebElement error = waitUpTo(10).until(ExpectedConditions.presenceOfElementLocated(By.id("rangeMax-error")));
         assertThat(error.getText()).contains("'ten' is not a number");
+        assertThat(driver.switchTo().activeElement().getAttribute("id")).as("focus on the first field to correct")
+                .isEqualTo("rangeMin");
         assertThat(driver.findElement(By.id("rangeMax")).getAttribute("value")).isEqualTo("ten");
         assertThat(driver.findElement(By.id("rangeMax")).getAttribute("aria-invalid")).isEqualTo("true");
         assertThat(driver.findElement(By.id("description")).getAttribute("value")).isEqualTo("Never saved");
