@@ -357,8 +357,9 @@ final class StaticMetrics {
 
                 @Override
                 public double sensitivityAt(double input) {
-                    return curve.sensitivityOhmPerC(Units.convert(input, in, "Cel")) / ohmPerOutput
-                            / factor(in, "Cel");
+                    // dy/dx = (dR/dt)·(dt/dx)/(Ω per output unit), dt/dx the size of the input unit in °C
+                    return curve.sensitivityOhmPerC(Units.convert(input, in, "Cel")) * factor(in, "Cel")
+                            / ohmPerOutput;
                 }
             });
         }

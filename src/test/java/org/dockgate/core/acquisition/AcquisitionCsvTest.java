@@ -61,6 +61,19 @@ class AcquisitionCsvTest {
     }
 
     @Test
+    void theExampleInDevelopersMdParses() throws java.io.IOException {
+        String guide = java.nio.file.Files.readString(java.nio.file.Path.of("DEVELOPERS.md"));
+        int section = guide.indexOf("## Data-acquisition CSV format");
+        assertThat(section).as("DEVELOPERS.md has the format section").isNotNegative();
+        int start = guide.indexOf("```\n", section) + 4;
+        String example = guide.substring(start, guide.indexOf("```", start));
+        Parsed p = parse(example);
+        assertThat(p.report().messages()).isEmpty();
+        assertThat(p.readings()).hasSize(5);
+        assertThat(p.readings().get(2).value()).isCloseTo(100.06, within(1e-12)); // 0.10006 V
+    }
+
+    @Test
     void psiSetPointsAreConvertedIntoABarProcedure() {
         Parsed p = parse(AcquisitionCsv.HEADER + "\n"
                 + "SN-7,STATIC,29.00755 psi,UP,1,20.1,mV\n"

@@ -219,6 +219,23 @@ class UnitEvaluationTest {
     }
 
     @Test
+    void everyPrefixOfTheReadingsEvaluatesAndOnlyTheLastIsComplete() {
+        // Live verdicts: readings arrive one at a time in the procedure's order; each partial set must evaluate
+        // (missing items named, never an exception) and only the full set is complete.
+        UnitMeasurements all = complete(H);
+        List<CalibrationPoint> readings = all.staticPoints();
+        for (int n = 0; n <= readings.size(); n++) {
+            UnitResult result = UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY, new UnitMeasurements(
+                    readings.subList(0, n), all.noiseSamples(), List.of(), all.context()));
+            assertThat(result.complete()).as("complete after %d readings", n).isEqualTo(n == readings.size());
+            assertThat(result.missing().isEmpty()).isEqualTo(result.complete());
+            if (n >= 2) {
+                assertThat(result.metric(Metric.SENSITIVITY)).as("sensitivity after %d readings", n).isPresent();
+            }
+        }
+    }
+
+    @Test
     void nothingMeasuredGivesNoVerdict() {
         UnitResult result = UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY,
                 UnitMeasurements.builder().build());
