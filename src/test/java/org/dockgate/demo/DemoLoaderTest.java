@@ -18,6 +18,12 @@ class DemoLoaderTest {
     @Autowired JdbcTemplate jdbc;
 
     @Test
+    void everyStepOfTheScenarioLoaded() {
+        List<String> loaded = jdbc.queryForList("select name from demo_seed_step", String.class);
+        assertThat(loaded).containsAll(loader.stepNames());
+    }
+
+    @Test
     void aSecondLoadChangesNothing() {
         List<String> tables = List.of("user_account", "demo_seed_step", "audit_entry");
         Map<String, Long> before = counts(tables);

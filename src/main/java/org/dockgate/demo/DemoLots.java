@@ -1,0 +1,180 @@
+package org.dockgate.demo;
+
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.time.Clock;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+import org.dockgate.bench.BenchService;
+import org.dockgate.bench.ExpectedReading;
+import org.dockgate.bench.NewReading;
+import org.dockgate.bench.ReadingTest;
+import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.core.procedure.SensorSpecification;
+import org.dockgate.core.quantity.Units;
+import org.dockgate.core.rtd.CallendarVanDusen;
+import org.dockgate.core.series.Direction;
+import org.dockgate.evaluation.DispositionAction;
+import org.dockgate.evaluation.EvaluationService;
+import org.dockgate.receiving.LotState;
+import org.dockgate.receiving.LotView;
+import org.dockgate.receiving.NewLot;
+import org.dockgate.receiving.NewReceipt;
+import org.dockgate.receiving.ReceivingService;
+import org.springframework.core.annotation.Order;
+import org.springframework.stereotype.Component;
+
+/**
+ * Invented bench readings for the demo's lots, recorded through the bench as the operators and evaluated
+ * by the real evaluation: the thermometers and a second pressure lot are measured in full and accepted,
+ * the load cells are measured in full and rejected (two units show too much hysteresis) with a
+ * nonconformance report, and the accelerometers are half measured. Values come from the nominal transfer
+ * function with small, seeded per-unit deviations; nothing here is a real measurement.
+ */
+@Component
+@Order(700)
+class DemoLots implements DemoStep {
+
+    private final ReceivingService receiving;
+    private final BenchService bench;
+    private final EvaluationService evaluation;
+    private final CatalogueService catalogue;
+    private final Clock clock;
+
+    DemoLots(ReceivingService receiving, BenchService bench, EvaluationService evaluation, CatalogueService catalogue,
+             Clock clock) {
+        this.receiving = receiving;
+        this.bench = bench;
+        this.evaluation = evaluation;
+        this.catalogue = catalogue;
+        this.clock = clock;
+    }
+
+    @Override
+    public String name() {
+        return "lots with readings";
+    }
+
+    @Override
+    public void load(SeedFiles files) {
+        receiveSecondPressureLot();
+        for (LotView lot : receiving.lots(LotState.AWAITING_MEASUREMENT)) {
+            SensorSpecification spec = catalogue.revision(lot.specificationRevisionId()).orElseThrow().specification();
+            switch (lot.partNumber()) {
+                case "PX-4410" -> measure(lot, spec, 3, false, List.of());
+                case "LC-500S" -> {
+                    measure(lot, spec, lot.sampledSerials().size(), true,
+                            List.of(lot.sampledSerials().get(2), lot.sampledSerials().get(7)));
+                    DemoLoader.as("engineer", () -> evaluation.disposition(lot.id(), DispositionAction.RETURN_TO_SUPPLIER,
+                            "Two units show hysteresis above the limit; the rest of the lot is returned with them.", true,
+                            LocalDate.now(clock).plusDays(30), receiving.lot(lot.id()).orElseThrow().version()));
+                }
+                default -> {
+                    measure(lot, spec, lot.sampledSerials().size(), true, List.of());
+                    DemoLoader.as("engineer", () -> evaluation.disposition(lot.id(), null, "", false, null,
+                            receiving.lot(lot.id()).orElseThrow().version()));
+                }
+            }
+        }
+    }
+
+    /** A second pressure-transducer lot, from the other supplier of QP-250, so two lots end accepted. */
+    private void receiveSecondPressureLot() {
+        var model = catalogue.modelByPartNumber("QP-250");
+        var supplier = catalogue.supplierByCode("PLM");
+        if (model.isEmpty() || supplier.isEmpty() || model.get().suppliers().stream().noneMatch(s -> s.code().equals("PLM"))) {
+            return;
+        }
+        List<String> serials = new ArrayList<>();
+        for (int i = 1; i <= 40; i++) {
+            serials.add("PLM-QP250-" + String.format("%05d", 3100 + i));
+        }
+        DemoLoader.as("operator2", () -> receiving.receive(new NewReceipt("PO-2026-117", "DN-PLM-0932",
+                LocalDate.now(clock).minusDays(1), supplier.get().id(),
+                List.of(new NewLot(model.get().id(), 40, serials)), "demo-receipt-PLM-QP250")));
+    }
+
+    /** Records the procedure's readings for the first {@code units} sampled units, alternating the two operators. */
+    private void measure(LotView lot, SensorSpecification spec, int units, boolean withNoise, List<String> faulty) {
+        var plan = bench.planFor(bench.lot(lot.id()).orElseThrow());
+        String instrument = plan.suggestedInstrument();
+        for (int u = 0; u < units && u < lot.sampledSerials().size(); u++) {
+            String serial = lot.sampledSerials().get(u);
+            Random random = new Random(serial.hashCode());
+            double gain = 1 + 0.0004 * random.nextGaussian();
+            double bow = 0.00004 * random.nextGaussian();
+            double hysteresis = faulty.contains(serial) ? 0.0008 : 0.00005 * Math.abs(random.nextGaussian());
+            double scatter = 0.00002;
+            double tempError = 0.02 * random.nextGaussian();
+            double fso = fullScaleOutput(spec);
+            List<NewReading> readings = new ArrayList<>();
+            for (ExpectedReading slot : plan.keyed()) {
+                double value;
+                if (slot.test() == ReadingTest.STATIC) {
+                    double x = slot.point();
+                    double shape = 4 * (x - spec.rangeMin()) / spec.span() * (1 - (x - spec.rangeMin()) / spec.span());
+                    double down = slot.direction().orElse(Direction.UP) == Direction.DOWN ? hysteresis * fso : 0;
+                    value = spec.rtd() != null
+                            ? CallendarVanDusen.iec60751(spec.rtd().r0Ohm()).resistanceOhm(x + tempError + 0.004 * random.nextGaussian())
+                            : nominal(spec, x) * gain + bow * fso * shape + down + scatter * fso * random.nextGaussian();
+                } else {
+                    // Sweep: constant input amplitude; a first-order roll-off far above the specified band.
+                    double f = slot.point();
+                    double limit = spec.bandwidth().upperHz();
+                    value = Math.abs(nominal(spec, plan.staticPoints().get(plan.staticPoints().size() - 1) * 0.2)) * gain
+                            * (1 + 0.004 * random.nextGaussian()) / Math.sqrt(1 + Math.pow(f / (5 * limit), 2));
+                }
+                readings.add(new NewReading(serial, slot.test(), slot.point(), slot.direction().orElse(null),
+                        slot.cycle().isPresent() ? slot.cycle().getAsInt() : null, round(value, spec), plan.outputUnit(),
+                        slot.test() == ReadingTest.SWEEP ? sweepInstrument(lot, instrument) : instrument,
+                        "demo-" + lot.id() + "-" + serial + "-" + slot.slot()));
+            }
+            if (withNoise && plan.noiseSamples() > 0) {
+                double sigma = spec.noiseFloor() == null ? 0.001 : 0.4 * spec.noiseFloor().limit() * Math.abs(nominal(spec, 1) - nominal(spec, 0));
+                for (int i = 0; i < plan.noiseSamples(); i++) {
+                    readings.add(new NewReading(serial, ReadingTest.NOISE, (double) i, null, null,
+                            round(sigma * random.nextGaussian(), spec), plan.outputUnit(), instrument,
+                            "demo-" + lot.id() + "-" + serial + "-n" + i));
+                }
+            }
+            String operator = u % 2 == 0 ? "operator" : "operator2";
+            double ambient = 22.6 + 0.1 * (u % 5);
+            double humidity = 44.0 + (u % 3);
+            DemoLoader.as(operator, () -> {
+                bench.recordConditions(lot.id(), serial, ambient, humidity);
+                return bench.recordMany(lot.id(), readings);
+            });
+        }
+    }
+
+    private String sweepInstrument(LotView lot, String staticInstrument) {
+        var procedure = bench.planFor(bench.lot(lot.id()).orElseThrow());
+        return staticInstrument == null ? procedure.suggestedInstrument() : staticInstrument;
+    }
+
+    private static double nominal(SensorSpecification spec, double x) {
+        double s = Units.convert(spec.sensitivity().nominal(), spec.sensitivity().unit(),
+                "(" + spec.outputUnit() + ")/(" + spec.inputUnit() + ")");
+        double offset = spec.zeroOffset() == null ? 0
+                : Units.convert(spec.zeroOffset().nominal(), spec.zeroOffset().unit(), spec.outputUnit());
+        return offset + s * x;
+    }
+
+    private static double fullScaleOutput(SensorSpecification spec) {
+        if (spec.rtd() != null) {
+            CallendarVanDusen cvd = CallendarVanDusen.iec60751(spec.rtd().r0Ohm());
+            return Math.abs(cvd.resistanceOhm(spec.rangeMax()) - cvd.resistanceOhm(spec.rangeMin()));
+        }
+        return Math.abs(nominal(spec, spec.rangeMax()) - nominal(spec, spec.rangeMin()));
+    }
+
+    /** Six significant digits, as a bench readout shows them. */
+    private static double round(double value, SensorSpecification spec) {
+        if (value == 0) {
+            return 0;
+        }
+        return new BigDecimal(value).round(new MathContext(6)).doubleValue();
+    }
+}

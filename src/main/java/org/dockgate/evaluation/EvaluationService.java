@@ -1,0 +1,331 @@
+package org.dockgate.evaluation;
+
+import java.math.BigDecimal;
+import java.time.Clock;
+import java.time.Instant;
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+import java.util.stream.Collectors;
+import org.dockgate.audit.AuditEvent;
+import org.dockgate.audit.AuditEvent.FieldChange;
+import org.dockgate.bench.BenchService;
+import org.dockgate.bench.Reading;
+import org.dockgate.bench.ReadingTest;
+import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.core.decision.Verdict;
+import org.dockgate.core.evaluation.ConditionalCounting;
+import org.dockgate.core.evaluation.Environment;
+import org.dockgate.core.evaluation.LotTally;
+import org.dockgate.core.evaluation.MeasurementContext;
+import org.dockgate.core.evaluation.MetricResult;
+import org.dockgate.core.evaluation.ReferenceUncertainty;
+import org.dockgate.core.evaluation.UnitEvaluation;
+import org.dockgate.core.evaluation.UnitMeasurements;
+import org.dockgate.core.evaluation.UnitResult;
+import org.dockgate.core.procedure.SensorSpecification;
+import org.dockgate.core.sampling.SingleSamplingPlans;
+import org.dockgate.instruments.InstrumentService;
+import org.dockgate.procedures.ApprovedProcedure;
+import org.dockgate.procedures.ProcedureService;
+import org.dockgate.receiving.LotState;
+import org.dockgate.receiving.LotView;
+import org.dockgate.receiving.ReceivingService;
+import org.springframework.context.ApplicationEventPublisher;
+import org.springframework.jdbc.core.JdbcTemplate;
+import org.springframework.security.core.context.SecurityContextHolder;
+import org.springframework.stereotype.Service;
+import org.springframework.transaction.annotation.Transactional;
+import tools.jackson.databind.json.JsonMapper;
+
+/**
+ * The evaluation module's face: each sampled unit's metrics, budgets and verdicts computed by the core
+ * from the stored readings as they arrive, the lot's count of nonconforming units, and the lot
+ * disposition — lot state, switching state, nonconformance report and the frozen unit results in one
+ * transaction.
+ */
+@Service
+public class EvaluationService {
+
+    /** The lab's reference temperature for the environment's contribution (common practice: 23 °C). */
+    static final double REFERENCE_TEMPERATURE_C = 23.0;
+
+    private final ReceivingService receiving;
+    private final BenchService bench;
+    private final ProcedureService procedures;
+    private final CatalogueService catalogue;
+    private final InstrumentService instruments;
+    private final JdbcTemplate jdbc;
+    private final ApplicationEventPublisher events;
+    private final Clock clock;
+    private final JsonMapper json;
+
+    EvaluationService(ReceivingService receiving, BenchService bench, ProcedureService procedures,
+                      CatalogueService catalogue, InstrumentService instruments, JdbcTemplate jdbc,
+                      ApplicationEventPublisher events, Clock clock, JsonMapper json) {
+        this.receiving = receiving;
+        this.bench = bench;
+        this.procedures = procedures;
+        this.catalogue = catalogue;
+        this.instruments = instruments;
+        this.jdbc = jdbc;
+        this.events = events;
+        this.clock = clock;
+        this.json = json;
+    }
+
+    /** Evaluates one unit from its current readings (superseded readings are left out). */
+    @Transactional(readOnly = true)
+    public UnitEvaluationView unit(long lotId, String serial) {
+        LotView lot = lot(lotId);
+        if (!lot.sampled(serial)) {
+            throw new IllegalArgumentException("The unit " + serial + " is not in the sample of lot " + lotId + ".");
+        }
+        ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
+        return evaluate(lot, procedure, spec(procedure), serial);
+    }
+
+    @Transactional(readOnly = true)
+    public LotEvaluationView lotEvaluation(long lotId) {
+        LotView lot = lot(lotId);
+        ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
+        SensorSpecification spec = spec(procedure);
+        List<UnitEvaluationView> units = new ArrayList<>();
+        for (String serial : lot.sampledSerials()) {
+            units.add(evaluate(lot, procedure, spec, serial));
+        }
+        boolean complete = units.stream().allMatch(UnitEvaluationView::complete);
+        int nonconforming = LotTally.count(units.stream().map(u -> u.result().unitVerdict().orElse(Verdict.PASS)).toList(),
+                ConditionalCounting.DEFAULT);
+        Optional<Boolean> wouldAccept = complete
+                ? Optional.of(SingleSamplingPlans.disposition(lot.plan().plan(), nonconforming).accepted())
+                : Optional.empty();
+        return new LotEvaluationView(lot, procedure, units, complete, nonconforming, wouldAccept, nonconformance(lotId));
+    }
+
+    /**
+     * Dispositions a lot whose sample is complete, in one transaction: the lot's result from Ac/Re and the
+     * switching state (receiving), each unit's result frozen, and for a rejected lot a nonconformance
+     * report with its action. A concession (use as is) waits for a SUPERVISOR's approval. The person must
+     * not be the only one who recorded the readings (separation of duties), unless nobody else can.
+     */
+    @Transactional
+    public LotEvaluationView disposition(long lotId, DispositionAction actionIfRejected, String notes,
+                                         boolean correctiveActionRequested, LocalDate correctiveActionDue,
+                                         long expectedLotVersion) {
+        LotEvaluationView evaluation = lotEvaluation(lotId);
+        LotView lot = evaluation.lot();
+        if (lot.version() != expectedLotVersion) {
+            throw new org.springframework.orm.ObjectOptimisticLockingFailureException("Lot", lotId);
+        }
+        if (lot.state() != LotState.AWAITING_MEASUREMENT) {
+            throw new IllegalStateException("Lot " + lotId + " is already dispositioned.");
+        }
+        if (!evaluation.complete()) {
+            throw new IllegalStateException("The sample of lot " + lotId + " is not complete: "
+                    + evaluation.units().stream().filter(u -> !u.complete()).map(UnitEvaluationView::serial)
+                    .collect(Collectors.joining(", ")) + " still need readings.");
+        }
+        boolean accepted = evaluation.wouldAccept().orElseThrow();
+        if (!accepted && actionIfRejected == null) {
+            throw new IllegalArgumentException("The lot is rejected: choose what happens to it (return, screening,"
+                    + " concession or scrap).");
+        }
+        if (!accepted && correctiveActionRequested && correctiveActionDue == null) {
+            throw new IllegalArgumentException("Give the due date of the corrective-action request.");
+        }
+        var result = receiving.recordLotResult(lotId, evaluation.nonconforming(), expectedLotVersion,
+                receiving.switching(lot.supplierId(), lot.modelId()).orElseThrow().version());
+        OffsetDateTime now = clock.instant().atOffset(ZoneOffset.UTC);
+        for (UnitEvaluationView u : evaluation.units()) {
+            jdbc.update("insert into unit_evaluation_snapshot (lot_id, serial, unit_verdict, result_json, operators,"
+                            + " instruments, evaluated_at) values (?, ?, ?, ?, ?, ?, ?)", lotId, u.serial(),
+                    u.result().unitVerdict().orElseThrow().name(), json.writeValueAsString(u.result()),
+                    String.join(",", u.operators()), String.join(",", u.instruments()), now);
+        }
+        if (!result.disposition().accepted()) {
+            String failing = evaluation.units().stream()
+                    .filter(u -> !u.result().unitVerdict().orElseThrow().isConforming()
+                            || u.result().unitVerdict().orElseThrow() == Verdict.CONDITIONAL_FAIL)
+                    .map(u -> u.serial() + ": " + u.result().metrics().stream()
+                            .filter(m -> m.verdict() != Verdict.PASS)
+                            .map(m -> m.metric().name() + " " + m.verdict()).collect(Collectors.joining(", ")))
+                    .collect(Collectors.joining("; "));
+            String number = nextReportNumber();
+            jdbc.update("insert into nonconformance_report (report_number, lot_id, action, failing, notes, corrective_action,"
+                            + " corrective_action_due, created_by, created_at) values (?, ?, ?, ?, ?, ?, ?, ?, ?)", number,
+                    lotId, actionIfRejected.name(), failing, notes == null ? "" : notes.trim(), correctiveActionRequested,
+                    correctiveActionRequested ? correctiveActionDue : null, actor(), now);
+            events.publishEvent(AuditEvent.of("NONCONFORMANCE", number, "OPEN", "Nonconformance report " + number
+                            + " for lot " + lotId + ": " + actionIfRejected)
+                    .withChanges(List.of(FieldChange.of("failing", null, failing),
+                            FieldChange.of("action", null, actionIfRejected),
+                            FieldChange.of("correctiveActionRequested", null, correctiveActionRequested))));
+        }
+        return lotEvaluation(lotId);
+    }
+
+    /** A SUPERVISOR approves a use-as-is concession, with the reason. */
+    @Transactional
+    public NonconformanceReport approveConcession(long lotId, String reason) {
+        NonconformanceReport report = nonconformance(lotId)
+                .orElseThrow(() -> new IllegalArgumentException("Lot " + lotId + " has no nonconformance report."));
+        if (report.action() != DispositionAction.USE_AS_IS_CONCESSION) {
+            throw new IllegalStateException("Report " + report.number() + " does not ask for a concession.");
+        }
+        if (report.concessionApprovedBy().isPresent()) {
+            throw new IllegalStateException("The concession of " + report.number() + " is already approved.");
+        }
+        if (reason == null || reason.isBlank()) {
+            throw new IllegalArgumentException("Give the reason for the concession.");
+        }
+        jdbc.update("insert into concession_approval (report_id, approved_by, reason, approved_at) values (?, ?, ?, ?)",
+                report.id(), actor(), reason.trim(), clock.instant().atOffset(ZoneOffset.UTC));
+        events.publishEvent(AuditEvent.withReason("NONCONFORMANCE", report.number(), "CONCESSION",
+                "Concession approved for lot " + lotId + " (" + report.number() + ")", reason.trim()));
+        return nonconformance(lotId).orElseThrow();
+    }
+
+    @Transactional(readOnly = true)
+    public Optional<NonconformanceReport> nonconformance(long lotId) {
+        var rows = jdbc.queryForList("select r.*, c.approved_by, c.reason as concession_reason, c.approved_at"
+                + " from nonconformance_report r left join concession_approval c on c.report_id = r.id where r.lot_id = ?", lotId);
+        if (rows.isEmpty()) {
+            return Optional.empty();
+        }
+        Map<String, Object> r = rows.get(0);
+        Object due = r.get("corrective_action_due");
+        return Optional.of(new NonconformanceReport(((Number) r.get("id")).longValue(), (String) r.get("report_number"),
+                lotId, DispositionAction.valueOf((String) r.get("action")), (String) r.get("failing"), (String) r.get("notes"),
+                (Boolean) r.get("corrective_action"),
+                Optional.ofNullable(due == null ? null : due instanceof java.sql.Date d ? d.toLocalDate() : (LocalDate) due),
+                (String) r.get("created_by"), instant(r.get("created_at")), Optional.ofNullable((String) r.get("approved_by")),
+                Optional.ofNullable((String) r.get("concession_reason")),
+                Optional.ofNullable(r.get("approved_at")).map(EvaluationService::instant)));
+    }
+
+    /** The unit results frozen at disposition, as JSON, keyed by serial (for certificates and recomputation checks). */
+    @Transactional(readOnly = true)
+    public Map<String, String> snapshots(long lotId) {
+        Map<String, String> out = new java.util.LinkedHashMap<>();
+        jdbc.query("select serial, result_json from unit_evaluation_snapshot where lot_id = ? order by serial",
+                rs -> {
+                    out.put(rs.getString(1), rs.getString(2));
+                }, lotId);
+        return out;
+    }
+
+    /** Serialises a unit result the way snapshots store it, to compare a recomputation with the frozen record. */
+    public String canonical(UnitResult result) {
+        return json.writeValueAsString(result);
+    }
+
+    private UnitEvaluationView evaluate(LotView lot, ApprovedProcedure procedure, SensorSpecification spec, String serial) {
+        List<Reading> readings = bench.currentReadings(lot.id(), serial);
+        UnitMeasurements.Builder m = UnitMeasurements.builder();
+        List<UnitEvaluationView.StaticPoint> statics = new ArrayList<>();
+        List<UnitEvaluationView.SweepPoint> sweep = new ArrayList<>();
+        Set<String> staticInstruments = new LinkedHashSet<>();
+        Set<String> sweepInstruments = new LinkedHashSet<>();
+        List<Reading> staticReadings = new ArrayList<>();
+        for (Reading r : readings) {
+            switch (r.test()) {
+                case STATIC -> {
+                    var direction = r.direction().orElse(org.dockgate.core.series.Direction.UP);
+                    int cycle = r.cycle().orElse(1);
+                    m.staticReading(r.point(), r.value(), direction, cycle);
+                    statics.add(new UnitEvaluationView.StaticPoint(r.point(), r.value(), direction.name(), cycle));
+                    staticInstruments.add(r.instrument());
+                    staticReadings.add(r);
+                }
+                case NOISE -> m.noiseSample(r.value());
+                case SWEEP -> {
+                    m.sweepPoint(r.point(), r.value());
+                    sweep.add(new UnitEvaluationView.SweepPoint(r.point(), r.value()));
+                    sweepInstruments.add(r.instrument());
+                }
+            }
+        }
+        Optional<ReferenceUncertainty> staticRef = staticInstruments.stream().findFirst().map(id -> reference(id, spec));
+        Optional<ReferenceUncertainty> sweepRef = sweepInstruments.stream().findFirst().map(id -> reference(id, spec));
+        var conditions = bench.conditions(lot.id(), serial);
+        MeasurementContext context = new MeasurementContext(staticRef, sweepRef, readoutDigit(staticReadings),
+                conditions.map(c -> Environment.fromAmbient(c.ambientC(), REFERENCE_TEMPERATURE_C)));
+        UnitResult result = UnitEvaluation.evaluate(spec, procedure.content(), procedure.settings().policy(),
+                m.context(context).build());
+        Set<String> used = new LinkedHashSet<>(staticInstruments);
+        used.addAll(sweepInstruments);
+        Set<String> operators = readings.stream().map(Reading::recordedBy).collect(Collectors.toCollection(LinkedHashSet::new));
+        return new UnitEvaluationView(serial, result, readings.size(), operators, used,
+                conditions.map(c -> c.ambientC()), conditions.map(c -> c.relativeHumidityPercent()), statics, sweep);
+    }
+
+    /** The reference instrument's U at an input, in the specification's input unit, from the register. */
+    private ReferenceUncertainty reference(String identifier, SensorSpecification spec) {
+        var view = instruments.find(identifier).orElseThrow();
+        String unit = spec.inputUnit();
+        return new ReferenceUncertainty(identifier, x -> instruments.expandedUncertaintyAt(identifier, x, unit),
+                view.current().coverageFactor());
+    }
+
+    /**
+     * The readout's last digit, inferred from the values as entered (the finest decimal place any of them
+     * uses), converted to the output unit: the technician reads what the display shows, so its digit is
+     * the resolution (GUM F.2.2.1, rectangular with half-width digit / 2).
+     */
+    static OptionalDouble readoutDigit(List<Reading> readings) {
+        int decimals = -1;
+        double scale = 1;
+        for (Reading r : readings) {
+            if (r.enteredValue() == 0) {
+                continue;
+            }
+            int d = Math.max(0, new BigDecimal(Double.toString(r.enteredValue())).stripTrailingZeros().scale());
+            decimals = Math.max(decimals, Math.min(d, 9));
+            scale = r.value() / r.enteredValue();
+        }
+        return decimals < 0 ? OptionalDouble.empty() : OptionalDouble.of(Math.abs(Math.pow(10, -decimals) * scale));
+    }
+
+    private LotView lot(long lotId) {
+        return receiving.lot(lotId).orElseThrow(() -> new IllegalArgumentException("There is no lot " + lotId + "."));
+    }
+
+    private SensorSpecification spec(ApprovedProcedure procedure) {
+        return catalogue.revision(procedure.specificationRevisionId()).orElseThrow().specification();
+    }
+
+    private String nextReportNumber() {
+        int year = clock.instant().atOffset(ZoneOffset.UTC).getYear();
+        Integer count = jdbc.queryForObject("select count(*) from nonconformance_report where report_number like ?",
+                Integer.class, "NCR-" + year + "-%");
+        return String.format("NCR-%d-%04d", year, (count == null ? 0 : count) + 1);
+    }
+
+    private static Instant instant(Object value) {
+        if (value instanceof OffsetDateTime o) {
+            return o.toInstant();
+        }
+        if (value instanceof java.sql.Timestamp t) {
+            return t.toInstant();
+        }
+        throw new IllegalStateException("Unexpected timestamp " + value);
+    }
+
+    private static String actor() {
+        var auth = SecurityContextHolder.getContext().getAuthentication();
+        return auth == null ? "system" : auth.getName();
+    }
+
+    /** For pages: the metrics of a unit that did not pass. */
+    public static List<MetricResult> notPassing(UnitResult result) {
+        return result.metrics().stream().filter(m -> m.verdict() != Verdict.PASS).toList();
+    }
+}

@@ -1,0 +1,57 @@
+package org.dockgate.evaluation.web;
+
+import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.tags.Tag;
+import java.time.LocalDate;
+import org.dockgate.evaluation.DispositionAction;
+import org.dockgate.evaluation.EvaluationService;
+import org.dockgate.evaluation.LotEvaluationView;
+import org.dockgate.evaluation.NonconformanceReport;
+import org.springframework.web.bind.annotation.GetMapping;
+import org.springframework.web.bind.annotation.PathVariable;
+import org.springframework.web.bind.annotation.PostMapping;
+import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RestController;
+
+@RestController
+@Tag(name = "Evaluation", description = "Unit results, lot dispositions and nonconformance reports")
+class EvaluationApiController {
+
+    private final EvaluationService evaluation;
+
+    EvaluationApiController(EvaluationService evaluation) {
+        this.evaluation = evaluation;
+    }
+
+    record DispositionRequest(DispositionAction action, String notes, Boolean correctiveActionRequested,
+                              LocalDate correctiveActionDue, Long expectedLotVersion) {
+    }
+
+    record ConcessionRequest(String reason) {
+    }
+
+    @GetMapping("/api/v1/lots/{id}/evaluation")
+    @Operation(summary = "Each sampled unit's metrics, uncertainty budgets and verdicts, and the lot's tally so far")
+    LotEvaluationView evaluation(@PathVariable long id) {
+        return evaluation.lotEvaluation(id);
+    }
+
+    @PostMapping("/api/v1/lots/{id}/disposition")
+    @Operation(summary = "Disposition a lot whose sample is complete (ENGINEER)",
+            description = "Accept or reject follows from Ac/Re; for a rejected lot give the action. Lot state, switching"
+                    + " state, frozen unit results and the nonconformance report commit together.")
+    LotEvaluationView disposition(@PathVariable long id, @RequestBody DispositionRequest request) {
+        if (request.expectedLotVersion() == null) {
+            throw new IllegalArgumentException("'expectedLotVersion' is required (the lot's version you have seen).");
+        }
+        return evaluation.disposition(id, request.action(), request.notes(),
+                Boolean.TRUE.equals(request.correctiveActionRequested()), request.correctiveActionDue(),
+                request.expectedLotVersion());
+    }
+
+    @PostMapping("/api/v1/lots/{id}/concession")
+    @Operation(summary = "Approve a use-as-is concession (SUPERVISOR), with its reason")
+    NonconformanceReport concession(@PathVariable long id, @RequestBody ConcessionRequest request) {
+        return evaluation.approveConcession(id, request.reason());
+    }
+}
