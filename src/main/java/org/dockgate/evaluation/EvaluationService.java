@@ -141,8 +141,8 @@ public class EvaluationService {
         if (!accepted && correctiveActionRequested && correctiveActionDue == null) {
             throw new IllegalArgumentException("Give the due date of the corrective-action request.");
         }
-        var result = receiving.recordLotResult(lotId, evaluation.nonconforming(), expectedLotVersion,
-                receiving.switching(lot.supplierId(), lot.modelId()).orElseThrow().version());
+        // The lot's version was checked above; receiving checks it again, with the switching state's, in this transaction.
+        var result = receiving.recordLotResult(lotId, evaluation.nonconforming());
         OffsetDateTime now = clock.instant().atOffset(ZoneOffset.UTC);
         for (UnitEvaluationView u : evaluation.units()) {
             jdbc.update("insert into unit_evaluation_snapshot (lot_id, serial, unit_verdict, result_json, operators,"
