@@ -124,7 +124,13 @@ public class ReadingImport {
         MessageDigest sha = sha256();
         AcquisitionReport report;
         try (DigestInputStream digesting = new DigestInputStream(file.getInputStream(), sha);
-             BufferedReader reader = new BufferedReader(new InputStreamReader(digesting, StandardCharsets.UTF_8), 1 << 16)) {
+             BufferedReader reader = new BufferedReader(new InputStreamReader(
+                     // The parser closes its reader at the end; the rest of the file must still be hashed.
+                     new java.io.FilterInputStream(digesting) {
+                         @Override
+                         public void close() {
+                         }
+                     }, StandardCharsets.UTF_8), 1 << 16)) {
             report = AcquisitionCsv.parse(reader, ExpectedUnits.of(plan.inputUnit(), plan.outputUnit()), row -> {
                 Integer u = unitIndex.get(row.serial());
                 if (u == null) {

@@ -143,4 +143,44 @@ class ReadingImportTest {
         assertThat(saved()).isZero();
         assertThat(auditEntries()).isZero();
     }
+
+    /**
+     * One million readings in one transaction (opt-in, about a minute: -Ddockgate.bench.million=true).
+     * Streams the file from disk; memory stays flat because rows go to the database in batches.
+     */
+    @Test
+    @org.junit.jupiter.api.condition.EnabledIfSystemProperty(named = "dockgate.bench.million", matches = "true")
+    void aMillionReadingsImportInOneTransaction() throws Exception {
+        int perUnit = plan.readingsPerUnit();
+        int units = (int) Math.ceil(1_000_000.0 / perUnit);
+        lot = lots.open(lot.procedureRevisionId(), units);
+        java.nio.file.Path path = java.nio.file.Files.createTempFile("million", ".csv");
+        long rows = 0;
+        try (var out = java.nio.file.Files.newBufferedWriter(path)) {
+            out.write("serial,test,point,direction,cycle,value,unit\n");
+            for (String serial : lot.sampledSerials()) {
+                for (ExpectedReading e : plan.keyed()) {
+                    out.write(serial + "," + e.test() + "," + e.point() + "," + e.direction().map(Enum::name).orElse("")
+                            + "," + (e.cycle().isPresent() ? e.cycle().getAsInt() : "") + ",1.5," + plan.outputUnit() + "\n");
+                    rows++;
+                }
+                for (int i = 0; i < plan.noiseSamples() && rows < 1_000_000; i++) {
+                    out.write(serial + ",NOISE," + i + ",,," + (i % 5) * 1e-4 + "," + plan.outputUnit() + "\n");
+                    rows++;
+                }
+            }
+        }
+        long started = System.nanoTime();
+        long[] progressCalls = {0};
+        ImportOutcome outcome = BenchServiceTest.as("operator", () -> imports.importFile(lot.id(),
+                new org.springframework.core.io.FileSystemResource(path), instrument, false, (r, c) -> progressCalls[0]++));
+        double seconds = (System.nanoTime() - started) / 1e9;
+        java.nio.file.Files.delete(path);
+        System.out.printf("Imported %d readings in %.1f s (%d progress reports)%n", outcome.validRows(), seconds,
+                progressCalls[0]);
+        assertThat(outcome.errors()).isEmpty();
+        assertThat(outcome.validRows()).isEqualTo(rows).isGreaterThanOrEqualTo(1_000_000);
+        assertThat(saved()).isEqualTo((int) rows);
+        assertThat(progressCalls[0]).isGreaterThan(100);
+    }
 }
