@@ -81,7 +81,7 @@ public final class AcquisitionCsv {
     /**
      * Parses a file, reporting progress every {@value #DEFAULT_PROGRESS_EVERY} rows.
      *
-     * @param reader   the file's characters (the caller opens and closes it)
+     * @param reader   the file's characters; the caller opens and closes it (the parser does not close it)
      * @param units    the units to convert to
      * @param consumer receives each valid reading in file order; it may refuse one by throwing
      *                 {@link IllegalArgumentException}, whose message becomes that line's error
@@ -516,7 +516,7 @@ public final class AcquisitionCsv {
         }
     }
 
-    /** Counts the characters read and drops a leading byte-order mark. */
+    /** Counts the characters read, drops a leading byte-order mark, and leaves closing to the caller. */
     private static final class CountingReader extends FilterReader {
         long count;
         private boolean first = true;
@@ -549,6 +549,11 @@ public final class AcquisitionCsv {
                 }
             }
             return n;
+        }
+
+        @Override
+        public void close() {
+            // the caller's reader: the caller closes it
         }
     }
 }

@@ -174,6 +174,13 @@ class AcquisitionCsvTest {
     }
 
     @Test
+    void theCallersReaderIsLeftOpen() throws java.io.IOException {
+        StringReader reader = new StringReader(AcquisitionCsv.HEADER + "\nSN-1,STATIC,2,UP,1,1.0,mV\n");
+        AcquisitionCsv.parse(reader, BAR_MV, r -> { }, ProgressListener.NONE);
+        assertThat(reader.ready()).isTrue(); // a closed StringReader throws here
+    }
+
+    @Test
     void theConsumerMayRefuseAReading() {
         List<AcquiredReading> kept = new ArrayList<>();
         AcquisitionReport report = AcquisitionCsv.parse(new StringReader(AcquisitionCsv.HEADER
