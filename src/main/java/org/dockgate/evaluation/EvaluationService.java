@@ -66,10 +66,13 @@ public class EvaluationService {
     private final ApplicationEventPublisher events;
     private final Clock clock;
     private final JsonMapper json;
+    private final org.dockgate.accounts.AccountService accounts;
 
     EvaluationService(ReceivingService receiving, BenchService bench, ProcedureService procedures,
                       CatalogueService catalogue, InstrumentService instruments, JdbcTemplate jdbc,
-                      ApplicationEventPublisher events, Clock clock, JsonMapper json) {
+                      ApplicationEventPublisher events, Clock clock, JsonMapper json,
+                      org.dockgate.accounts.AccountService accounts) {
+        this.accounts = accounts;
         this.receiving = receiving;
         this.bench = bench;
         this.procedures = procedures;
@@ -185,6 +188,11 @@ public class EvaluationService {
         }
         if (reason == null || reason.isBlank()) {
             throw new IllegalArgumentException("Give the reason for the concession.");
+        }
+        boolean supervisor = accounts.byUsername(actor()).map(p -> p.has(org.dockgate.platform.Role.SUPERVISOR))
+                .orElse(false);
+        if (!supervisor) {
+            throw new IllegalStateException("A concession needs a SUPERVISOR's approval.");
         }
         jdbc.update("insert into concession_approval (report_id, approved_by, reason, approved_at) values (?, ?, ?, ?)",
                 report.id(), actor(), reason.trim(), clock.instant().atOffset(ZoneOffset.UTC));
