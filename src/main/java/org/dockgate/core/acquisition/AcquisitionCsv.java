@@ -13,6 +13,7 @@ import java.util.NoSuchElementException;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.function.Consumer;
+import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.apache.commons.csv.CSVException;
 import org.apache.commons.csv.CSVFormat;
@@ -59,6 +60,7 @@ public final class AcquisitionCsv {
     /** The longest serial number accepted. */
     public static final int MAX_SERIAL_LENGTH = 100;
 
+    private static final Pattern COLUMN_PREFIX = Pattern.compile("column '([a-z]+)': ");
     private static final Pattern NOT_FINITE = Pattern.compile("[+-]?(nan|inf|infinity|∞)", Pattern.CASE_INSENSITIVE);
 
     private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder()
@@ -84,7 +86,8 @@ public final class AcquisitionCsv {
      * @param reader   the file's characters; the caller opens and closes it (the parser does not close it)
      * @param units    the units to convert to
      * @param consumer receives each valid reading in file order; it may refuse one by throwing
-     *                 {@link IllegalArgumentException}, whose message becomes that line's error
+     *                 {@link RefusedReading} (filed under its column) or any {@link IllegalArgumentException},
+     *                 whose message becomes that line's error (under a column when it starts "column 'name': ")
      * @param progress told the progress
      * @return the report: rows read, readings accepted, errors
      * @throws IllegalArgumentException when an argument is null
@@ -152,8 +155,10 @@ public final class AcquisitionCsv {
                     try {
                         consumer.accept(reading);
                         accepted++;
+                    } catch (RefusedReading refused) {
+                        error(line, refused.column().orElse(null), refused.getMessage());
                     } catch (IllegalArgumentException refused) {
-                        error(line, null, refused.getMessage());
+                        refusal(line, refused.getMessage());
                     }
                 }
                 if (rows % progressEvery == 0) {
@@ -506,6 +511,17 @@ public final class AcquisitionCsv {
 
     private long errorsSeen() {
         return errors.size() + errorsNotListed;
+    }
+
+    /** A plain refusal; a message that starts "column 'name': " is filed under that column. */
+    private void refusal(long line, String message) {
+        String text = message == null ? "refused" : message;
+        Matcher m = COLUMN_PREFIX.matcher(text);
+        if (m.lookingAt() && COLUMNS.contains(m.group(1))) {
+            error(line, m.group(1), text.substring(m.end()));
+        } else {
+            error(line, null, text);
+        }
     }
 
     private void error(long line, String column, String message) {

@@ -197,6 +197,21 @@ class AcquisitionCsvTest {
     }
 
     @Test
+    void aRefusalNamesItsColumn() {
+        AcquisitionReport report = AcquisitionCsv.parse(new StringReader(AcquisitionCsv.HEADER
+                        + "\nSN-9,STATIC,2,UP,1,1.0,mV\nSN-9,STATIC,4,UP,1,1.0,mV\n"), BAR_MV,
+                r -> {
+                    if (r.point() == 2) {
+                        throw new RefusedReading("serial", "SN-9 is not one of the sampled units");
+                    }
+                    throw new IllegalArgumentException("column 'point': 4 bar is not a point of the procedure");
+                }, ProgressListener.NONE);
+        assertThat(report.messages()).containsExactly(
+                "line 2, column 'serial': SN-9 is not one of the sampled units",
+                "line 3, column 'point': 4 bar is not a point of the procedure");
+    }
+
+    @Test
     void theErrorListIsCappedAndTheRestCounted() {
         StringBuilder csv = new StringBuilder(AcquisitionCsv.HEADER).append('\n');
         for (int i = 0; i < 300; i++) {
