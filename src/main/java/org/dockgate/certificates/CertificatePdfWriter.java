@@ -10,8 +10,8 @@ import org.springframework.stereotype.Component;
  * <ul>
  *   <li>a header on every page with the lab's name and address ({@code dockgate.lab.name},
  *       {@code dockgate.lab.address}) and the certificate number and revision;</li>
- *   <li>a footer "Page x of y" on every page (ISO/IEC 17025:2017 7.8.2.1 c: each page identified as part
- *       of the report, with a clear end);</li>
+ *   <li>a footer "Page x of y" on every page (ISO/IEC 17025:2017 7.8.2.1 d, from memory: every part
+ *       recognisable as a portion of the complete report, with a clear identification of the end);</li>
  *   <li>at the end: the safety caution, a QR code for the verification page
  *       {@code <dockgate.public-base-url>/verify/<number>}, and the empty signature field where the
  *       signer's visible signature block goes.</li>

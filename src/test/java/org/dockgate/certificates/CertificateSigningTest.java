@@ -87,6 +87,24 @@ class CertificateSigningTest {
     }
 
     @Test
+    void theQrCodeScansToTheVerificationPage() throws Exception {
+        byte[] signed = signing.sign(SigningFixtures.render(writer, CertificateHeading.first("DG-2026-000777"), 0),
+                signer, "approved for release").pdf();
+        // Render the page with PDFBox and decode it with ZXing's reader: the code must scan as printed.
+        java.awt.image.BufferedImage image;
+        try (var document = org.apache.pdfbox.Loader.loadPDF(signed)) {
+            image = new org.apache.pdfbox.rendering.PDFRenderer(document).renderImageWithDPI(0, 200);
+        }
+        int[] pixels = image.getRGB(0, 0, image.getWidth(), image.getHeight(), null, 0, image.getWidth());
+        var bitmap = new com.google.zxing.BinaryBitmap(new com.google.zxing.common.HybridBinarizer(
+                new com.google.zxing.RGBLuminanceSource(image.getWidth(), image.getHeight(), pixels)));
+        var decoded = new com.google.zxing.MultiFormatReader().decode(bitmap,
+                java.util.Map.of(com.google.zxing.DecodeHintType.POSSIBLE_FORMATS,
+                        List.of(com.google.zxing.BarcodeFormat.QR_CODE), com.google.zxing.DecodeHintType.TRY_HARDER, true));
+        assertThat(decoded.getText()).isEqualTo("http://localhost:8080/verify/DG-2026-000777");
+    }
+
+    @Test
     void oneFlippedByteFailsBothTheIndependentAndTheProjectVerification() throws Exception {
         IssuedCertificate issued = SigningFixtures.as(signer, () -> register.issue(SigningFixtures.subject("SN-FLIP"),
                 signer, "approved for release", h -> SigningFixtures.render(writer, h, 0)));
