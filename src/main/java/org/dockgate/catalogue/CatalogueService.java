@@ -1,5 +1,7 @@
 package org.dockgate.catalogue;
 
+import org.dockgate.platform.CurrentActor;
+
 import java.time.Clock;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -131,7 +133,7 @@ public class CatalogueService {
         SensorModel model = models.save(new SensorModel(part, draft.name().trim(), draft.specification().kind(),
                 blankTo(draft.measurand(), draft.specification().kind().inputDimension()),
                 draft.outputKind() == null ? OutputKind.VOLTAGE : draft.outputKind(),
-                draft.excitation() == null ? "" : draft.excitation().trim(), supplierIds, actor(), clock.instant()));
+                draft.excitation() == null ? "" : draft.excitation().trim(), supplierIds, CurrentActor.username(), clock.instant()));
         events.publishEvent(AuditEvent.of("SENSOR_MODEL", model.getId(), "CREATE", "Sensor model " + part + " created")
                 .withChanges(List.of(FieldChange.of("partNumber", null, part), FieldChange.of("kind", null, model.getKind()),
                         FieldChange.of("suppliers", null, draft.supplierCodes()))));
@@ -164,7 +166,7 @@ public class CatalogueService {
 
     private SpecificationRevision writeRevision(SensorModel model, int number, SensorSpecification spec, String reason) {
         SpecificationRevisionRow row = revisions.saveAndFlush(new SpecificationRevisionRow(model.getId(), number,
-                json.writeValueAsString(spec), reason, actor(), clock.instant()));
+                json.writeValueAsString(spec), reason, CurrentActor.username(), clock.instant()));
         events.publishEvent(new AuditEvent("SPECIFICATION_REVISION", String.valueOf(row.getId()), "CREATE",
                 List.of(FieldChange.of("specification", null, row.getSpecificationJson())),
                 model.getPartNumber() + " rev " + number, reason, null));
@@ -228,10 +230,6 @@ public class CatalogueService {
                 r.getCreatedAt());
     }
 
-    private static String actor() {
-        var auth = SecurityContextHolder.getContext().getAuthentication();
-        return auth == null ? "system" : auth.getName();
-    }
 
     private static String blankTo(String value, String fallback) {
         return value == null || value.isBlank() ? (fallback == null ? "other" : fallback) : value.trim();

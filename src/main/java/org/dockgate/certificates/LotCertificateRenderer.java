@@ -140,8 +140,8 @@ class LotCertificateRenderer {
                     "Tolerance", "Acceptance limits", "Verdict");
             for (MetricResult m : unit.result().metrics()) {
                 cell(doc, results, m.metric().name().toLowerCase(Locale.ROOT).replace('_', ' '));
-                cell(doc, results, number(m.measured()) + " " + m.unit());
-                cell(doc, results, number(m.uncertainty().value()) + " (" + String.format(Locale.ROOT, "%.2f", m.uncertainty().coverageFactor()) + ")");
+                cell(doc, results, measured(m.measured(), m.uncertainty().value()) + " " + m.unit());
+                cell(doc, results, uncertainty(m.uncertainty().value()) + " (" + String.format(Locale.ROOT, "%.2f", m.uncertainty().coverageFactor()) + ")");
                 cell(doc, results, range(m.tolerance().lower(), m.tolerance().upper()));
                 cell(doc, results, range(m.acceptanceLower(), m.acceptanceUpper()));
                 cell(doc, results, m.verdict().name());
@@ -204,6 +204,26 @@ class LotCertificateRenderer {
             return "—";
         }
         return new java.math.BigDecimal(v).round(new java.math.MathContext(5)).stripTrailingZeros().toPlainString();
+    }
+
+    /**
+     * U with two significant digits, and the measured value rounded to the same decimal place
+     * (JCGM 100:2008 7.2.6), so floating-point noise far below U prints as 0.
+     */
+    static String uncertainty(double u) {
+        if (!(u > 0) || !Double.isFinite(u)) {
+            return number(u);
+        }
+        return new java.math.BigDecimal(u).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
+    }
+
+    static String measured(double value, double u) {
+        if (!(u > 0) || !Double.isFinite(u) || !Double.isFinite(value)) {
+            return number(value);
+        }
+        int decimals = 1 - (int) Math.floor(Math.log10(u));
+        return new java.math.BigDecimal(value).setScale(decimals, java.math.RoundingMode.HALF_EVEN).stripTrailingZeros()
+                .toPlainString().replaceFirst("^-0$", "0");
     }
 
     private static String range(OptionalDouble lower, OptionalDouble upper) {

@@ -1,5 +1,7 @@
 package org.dockgate.evaluation;
 
+import org.dockgate.platform.CurrentActor;
+
 import java.math.BigDecimal;
 import java.time.Clock;
 import java.time.Instant;
@@ -165,7 +167,7 @@ public class EvaluationService {
             jdbc.update("insert into nonconformance_report (report_number, lot_id, action, failing, notes, corrective_action,"
                             + " corrective_action_due, created_by, created_at) values (?, ?, ?, ?, ?, ?, ?, ?, ?)", number,
                     lotId, actionIfRejected.name(), failing, notes == null ? "" : notes.trim(), correctiveActionRequested,
-                    correctiveActionRequested ? correctiveActionDue : null, actor(), now);
+                    correctiveActionRequested ? correctiveActionDue : null, CurrentActor.username(), now);
             events.publishEvent(AuditEvent.of("NONCONFORMANCE", number, "OPEN", "Nonconformance report " + number
                             + " for lot " + lotId + ": " + actionIfRejected)
                     .withChanges(List.of(FieldChange.of("failing", null, failing),
@@ -189,13 +191,13 @@ public class EvaluationService {
         if (reason == null || reason.isBlank()) {
             throw new IllegalArgumentException("Give the reason for the concession.");
         }
-        boolean supervisor = accounts.byUsername(actor()).map(p -> p.has(org.dockgate.platform.Role.SUPERVISOR))
+        boolean supervisor = accounts.byUsername(CurrentActor.username()).map(p -> p.has(org.dockgate.platform.Role.SUPERVISOR))
                 .orElse(false);
         if (!supervisor) {
             throw new IllegalStateException("A concession needs a SUPERVISOR's approval.");
         }
         jdbc.update("insert into concession_approval (report_id, approved_by, reason, approved_at) values (?, ?, ?, ?)",
-                report.id(), actor(), reason.trim(), clock.instant().atOffset(ZoneOffset.UTC));
+                report.id(), CurrentActor.username(), reason.trim(), clock.instant().atOffset(ZoneOffset.UTC));
         events.publishEvent(AuditEvent.withReason("NONCONFORMANCE", report.number(), "CONCESSION",
                 "Concession approved for lot " + lotId + " (" + report.number() + ")", reason.trim()));
         return nonconformance(lotId).orElseThrow();
@@ -214,9 +216,9 @@ public class EvaluationService {
                 lotId, DispositionAction.valueOf((String) r.get("action")), (String) r.get("failing"), (String) r.get("notes"),
                 (Boolean) r.get("corrective_action"),
                 Optional.ofNullable(due == null ? null : due instanceof java.sql.Date d ? d.toLocalDate() : (LocalDate) due),
-                (String) r.get("created_by"), instant(r.get("created_at")), Optional.ofNullable((String) r.get("approved_by")),
+                (String) r.get("created_by"), CurrentActor.instant(r.get("created_at")), Optional.ofNullable((String) r.get("approved_by")),
                 Optional.ofNullable((String) r.get("concession_reason")),
-                Optional.ofNullable(r.get("approved_at")).map(EvaluationService::instant)));
+                Optional.ofNullable(r.get("approved_at")).map(CurrentActor::instant)));
     }
 
     /** The unit results frozen at disposition, as JSON, keyed by serial (for certificates and recomputation checks). */
@@ -317,20 +319,7 @@ public class EvaluationService {
         return String.format("NCR-%d-%04d", year, (count == null ? 0 : count) + 1);
     }
 
-    private static Instant instant(Object value) {
-        if (value instanceof OffsetDateTime o) {
-            return o.toInstant();
-        }
-        if (value instanceof java.sql.Timestamp t) {
-            return t.toInstant();
-        }
-        throw new IllegalStateException("Unexpected timestamp " + value);
-    }
 
-    private static String actor() {
-        var auth = SecurityContextHolder.getContext().getAuthentication();
-        return auth == null ? "system" : auth.getName();
-    }
 
     /** For pages: the metrics of a unit that did not pass. */
     public static List<MetricResult> notPassing(UnitResult result) {

@@ -1,5 +1,7 @@
 package org.dockgate.procedures;
 
+import org.dockgate.platform.CurrentActor;
+
 import java.time.Clock;
 import java.time.Instant;
 import java.time.OffsetDateTime;
@@ -132,7 +134,7 @@ public class ProcedureService {
             ps.setString(5, settings.rule().name());
             ps.setDouble(6, settings.guardBandFactor());
             ps.setDouble(7, settings.maxFalseAcceptRisk());
-            ps.setString(8, actor());
+            ps.setString(8, CurrentActor.username());
             ps.setObject(9, now());
             return ps;
         }, keys);
@@ -162,7 +164,7 @@ public class ProcedureService {
         Number approved = (Number) r.get("approved_revision_id");
         return new ProcedureDraft(id, revision.modelId(), revision.partNumber(), specId, revision.revisionNo(), settings,
                 overrides, propose(specId, settings, overrides), (String) r.get("justification"), (String) r.get("author"),
-                instant(r.get("created_at")), (String) r.get("status"), approved == null ? null : approved.longValue(), edits,
+                CurrentActor.instant(r.get("created_at")), (String) r.get("status"), approved == null ? null : approved.longValue(), edits,
                 ((Number) r.get("version")).longValue());
     }
 
@@ -190,7 +192,7 @@ public class ProcedureService {
         propose(draft.specificationRevisionId(), draft.settings(), overrides); // refuses an unacceptable value
         bump(draftId, expectedVersion, "overrides_json = ?", json.writeValueAsString(overrides));
         jdbc.update("insert into procedure_edit (draft_id, field, old_value, new_value, reason, edited_by, edited_at)"
-                + " values (?, ?, ?, ?, ?, ?, ?)", draftId, field, old, newValue.trim(), reason.trim(), actor(), now());
+                + " values (?, ?, ?, ?, ?, ?, ?)", draftId, field, old, newValue.trim(), reason.trim(), CurrentActor.username(), now());
         events.publishEvent(new AuditEvent("PROCEDURE_DRAFT", String.valueOf(draftId), "EDIT_WITH_REASON",
                 List.of(FieldChange.of(field, old == null ? "(derived)" : old, newValue.trim())),
                 "Changed " + field + " of the " + draft.partNumber() + " procedure draft", reason.trim(), null));
@@ -222,7 +224,7 @@ public class ProcedureService {
     public ApprovedProcedure approve(long draftId, long expectedVersion) {
         ProcedureDraft draft = draft(draftId);
         requireOpen(draft, expectedVersion);
-        String approver = actor();
+        String approver = CurrentActor.username();
         Person person = accounts.byUsername(approver)
                 .orElseThrow(() -> new IllegalStateException("Only a signed-in ENGINEER or SUPERVISOR can approve."));
         if (!person.has(Role.ENGINEER) && !person.has(Role.SUPERVISOR)) {
@@ -312,7 +314,7 @@ public class ProcedureService {
         return Optional.of(new ApprovedProcedure(id, spec.modelId(), spec.partNumber(), specId, spec.revisionNo(),
                 ((Number) r.get("revision_no")).intValue(), settings(r),
                 json.readValue((String) r.get("content_json"), ProcedureProposal.class), (String) r.get("justification"),
-                (String) r.get("author"), (String) r.get("approved_by"), instant(r.get("approved_at")),
+                (String) r.get("author"), (String) r.get("approved_by"), CurrentActor.instant(r.get("approved_at")),
                 ((Number) r.get("superseded")).longValue() > 0));
     }
 
@@ -364,18 +366,5 @@ public class ProcedureService {
         return clock.instant().atOffset(ZoneOffset.UTC);
     }
 
-    private static Instant instant(Object value) {
-        if (value instanceof OffsetDateTime o) {
-            return o.toInstant();
-        }
-        if (value instanceof java.sql.Timestamp t) {
-            return t.toInstant();
-        }
-        throw new IllegalStateException("Unexpected timestamp type " + value);
-    }
 
-    private static String actor() {
-        var auth = SecurityContextHolder.getContext().getAuthentication();
-        return auth == null ? "system" : auth.getName();
-    }
 }

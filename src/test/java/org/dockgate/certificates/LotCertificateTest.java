@@ -105,8 +105,8 @@ class LotCertificateTest {
             assertThat(text).contains("Unit " + unit.serial() + ": PASS");
             for (MetricResult m : unit.result().metrics()) {
                 String metric = m.metric().name().toLowerCase(Locale.ROOT).replace('_', ' ');
-                String row = metric + " " + LotCertificateRenderer.number(m.measured()) + " " + m.unit() + " "
-                        + LotCertificateRenderer.number(m.uncertainty().value()) + " ("
+                String row = metric + " " + LotCertificateRenderer.measured(m.measured(), m.uncertainty().value()) + " "
+                        + m.unit() + " " + LotCertificateRenderer.uncertainty(m.uncertainty().value()) + " ("
                         + String.format(Locale.ROOT, "%.2f", m.uncertainty().coverageFactor()) + ") "
                         + range(m.tolerance().lower(), m.tolerance().upper()) + " "
                         + range(m.acceptanceLower(), m.acceptanceUpper()) + " " + m.verdict().name();
@@ -303,5 +303,15 @@ class LotCertificateTest {
     static String range(OptionalDouble lower, OptionalDouble upper) {
         return (lower.isPresent() ? LotCertificateRenderer.number(lower.getAsDouble()) : "−∞") + " … "
                 + (upper.isPresent() ? LotCertificateRenderer.number(upper.getAsDouble()) : "+∞");
+    }
+
+    @Test
+    void resultsAreRoundedToTheirUncertainty() {
+        // JCGM 100:2008 7.2.6: U to (at most) two significant digits, the result to the same decimal place.
+        assertThat(LotCertificateRenderer.uncertainty(0.0015432)).isEqualTo("0.0015");
+        assertThat(LotCertificateRenderer.measured(10.001234, 0.0015432)).isEqualTo("10.0012");
+        assertThat(LotCertificateRenderer.measured(9.3e-16, 0.00018)).isEqualTo("0");
+        assertThat(LotCertificateRenderer.measured(-0.00001, 0.0018)).isEqualTo("0");
+        assertThat(LotCertificateRenderer.measured(123.456, 2.3)).isEqualTo("123.5");
     }
 }
