@@ -1,0 +1,65 @@
+package org.dockgate.catalogue;
+
+import static org.hamcrest.Matchers.containsString;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.httpBasic;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
+
+import java.util.UUID;
+import org.junit.jupiter.api.Test;
+import org.springframework.beans.factory.annotation.Autowired;
+import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+
+/** The catalogue and procedure API as the README shows it: create a model, refuse a unit mismatch, derive. */
+@SpringBootTest
+@AutoConfigureMockMvc
+class CatalogueApiTest {
+
+    @Autowired MockMvc mvc;
+    @Autowired CatalogueService catalogue;
+
+    static String model(String part, String sensitivityUnit) {
+        return """
+            {"partNumber":"%s","name":"Pressure transducer 0 to 6 bar","measurand":"pressure","outputKind":"VOLTAGE",
+             "excitation":"10 V DC","supplierCodes":["QSL"],
+             "specification":{"kind":"PRESSURE_TRANSDUCER","inputUnit":"bar","rangeMin":0,"rangeMax":6,"outputUnit":"mV",
+               "sensitivity":{"nominal":10,"unit":"%s","tolerance":1,"mode":"PERCENT"},"accuracyPctFso":0.5,"hysteresisPctFso":0.1}}
+            """.formatted(part, sensitivityUnit);
+    }
+
+    @Test
+    void createRefuseAndDerive() throws Exception {
+        String part = "API-" + UUID.randomUUID().toString().substring(0, 6);
+        mvc.perform(post("/api/v1/sensor-models").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON).content(model(part + "X", "mV/g")))
+                .andExpect(status().isBadRequest())
+                .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON))
+                .andExpect(jsonPath("$.detail").value(containsString("does not fit a pressure transducer")));
+        mvc.perform(post("/api/v1/sensor-models").with(httpBasic("operator", "operator-demo"))
+                        .contentType(MediaType.APPLICATION_JSON).content(model(part + "Y", "mV/bar")))
+                .andExpect(status().isForbidden());
+        mvc.perform(post("/api/v1/sensor-models").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON).content(model(part, "mV/bar")))
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.partNumber").value(part))
+                .andExpect(jsonPath("$.latest.revisionNo").value(1));
+        long revision = catalogue.modelByPartNumber(part).orElseThrow().latest().id();
+        mvc.perform(post("/api/v1/procedures/derive").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"specificationRevisionId\":" + revision
+                                + ",\"aql\":\"1.0\",\"level\":\"II\",\"rule\":\"GUARD_BANDED\",\"overrides\":{\"static.cycles\":\"5\"}}"))
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.staticCalibration.cycles").value(5))
+                .andExpect(jsonPath("$.staticCalibration.directions[1]").value("DOWN"))
+                .andExpect(jsonPath("$.staticCalibration.referenceInstrument").value("RI-PRS-01"));
+        mvc.perform(get("/api/v1/sensor-models/999999").with(httpBasic("auditor", "auditor-demo")))
+                .andExpect(status().isNotFound())
+                .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON));
+    }
+}
