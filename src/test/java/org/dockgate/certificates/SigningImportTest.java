@@ -19,7 +19,12 @@ import org.springframework.boot.test.context.SpringBootTest;
  * password rule. The imported CA (with its key) issues the following grants; a person's certificate
  * from an unknown CA is refused.
  */
-@SpringBootTest(properties = "dockgate.data-dir=target/test-data/import-${random.uuid}")
+// Its own data folder AND its own in-memory database, on every run: importing a CA and re-keying people
+// changes which signing keys the database expects, which must not leak into a database that other test
+// contexts share (the PostgreSQL run shares one database between all of them).
+@SpringBootTest(properties = {"dockgate.data-dir=target/test-data/import-${random.uuid}",
+    "spring.datasource.url=jdbc:h2:mem:import-${random.uuid};DB_CLOSE_DELAY=-1",
+    "spring.datasource.username=sa", "spring.datasource.password="})
 class SigningImportTest {
 
     @Autowired AccountService accounts;
