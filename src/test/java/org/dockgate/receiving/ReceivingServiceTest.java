@@ -27,7 +27,11 @@ import org.springframework.jdbc.core.JdbcTemplate;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
 import org.springframework.security.test.context.support.WithMockUser;
 
-@SpringBootTest
+// Its own in-memory database on every run: these tests fix lots to stand-in procedure revisions (see
+// ReceivingTestSupport), which must not appear in a database other test contexts share (the PostgreSQL run).
+@SpringBootTest(properties = {"spring.datasource.url=jdbc:h2:mem:receiving-${random.uuid};DB_CLOSE_DELAY=-1",
+    "spring.datasource.username=sa", "spring.datasource.password=",
+    "dockgate.data-dir=target/test-data/receiving-${random.uuid}"})
 @Import(ReceivingTestSupport.Config.class)
 @WithMockUser(username = "operator", roles = "OPERATOR")
 class ReceivingServiceTest {
