@@ -16,7 +16,6 @@ import org.dockgate.core.procedure.SensorKind;
 import org.dockgate.core.procedure.SensorSpecification;
 import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
-import org.springframework.security.core.context.SecurityContextHolder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 import tools.jackson.databind.json.JsonMapper;

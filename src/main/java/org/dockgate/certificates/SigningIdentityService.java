@@ -1,5 +1,7 @@
 package org.dockgate.certificates;
 
+import org.dockgate.platform.CurrentActor;
+
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.security.GeneralSecurityException;
@@ -145,7 +147,7 @@ public class SigningIdentityService {
                     .orElse(false);
             found.add(new SigningAuthority(((Number) row.get("id")).longValue(), Kind.valueOf((String) row.get("kind")),
                     (String) row.get("subject"), fingerprint, (String) row.get("certificate_pem"),
-                    instant(row.get("not_after")), (String) row.get("added_by"), instant(row.get("added_at")),
+                    CurrentActor.instant(row.get("not_after")), (String) row.get("added_by"), CurrentActor.instant(row.get("added_at")),
                     trusted.contains(fingerprint), canIssue, false));
         }
         // The issuing CA: the most recently imported CA that can issue, else the lab's own root.
@@ -455,10 +457,10 @@ public class SigningIdentityService {
         return new SigningIdentity(rs.getLong("id"), userId, person == null ? "#" + userId : person.username(),
                 person == null ? "#" + userId : person.displayName(), Origin.valueOf(rs.getString("origin")),
                 rs.getString("subject"), rs.getString("issuer"), rs.getString("serial_hex"), fingerprint,
-                rs.getString("certificate_pem"), instant(rs.getObject("not_before", OffsetDateTime.class)),
-                instant(rs.getObject("not_after", OffsetDateTime.class)), rs.getString("granted_by"),
-                instant(rs.getObject("granted_at", OffsetDateTime.class)),
-                instant(rs.getObject("revoked_at", OffsetDateTime.class)), rs.getString("revoked_by"),
+                rs.getString("certificate_pem"), CurrentActor.instant(rs.getObject("not_before", OffsetDateTime.class)),
+                CurrentActor.instant(rs.getObject("not_after", OffsetDateTime.class)), rs.getString("granted_by"),
+                CurrentActor.instant(rs.getObject("granted_at", OffsetDateTime.class)),
+                CurrentActor.instant(rs.getObject("revoked_at", OffsetDateTime.class)), rs.getString("revoked_by"),
                 rs.getString("revoke_reason"), keyPresent, rs.getLong("version"));
     }
 
@@ -534,21 +536,6 @@ public class SigningIdentityService {
         return instant == null ? null : instant.atOffset(ZoneOffset.UTC);
     }
 
-    private static Instant instant(Object value) {
-        if (value == null) {
-            return null;
-        }
-        if (value instanceof OffsetDateTime odt) {
-            return odt.toInstant();
-        }
-        if (value instanceof java.sql.Timestamp ts) {
-            return ts.toInstant();
-        }
-        if (value instanceof Instant i) {
-            return i;
-        }
-        throw new IllegalStateException("Unexpected time value " + value.getClass());
-    }
 
     private static String clip(String text, int max) {
         return text.length() <= max ? text : text.substring(0, max);

@@ -20,6 +20,9 @@ public final class CurrentActor {
 
     /** A {@code timestamp with time zone} column read through JdbcTemplate: H2 gives OffsetDateTime, PostgreSQL Timestamp. */
     public static Instant instant(Object value) {
+        if (value == null) {
+            return null;
+        }
         if (value instanceof OffsetDateTime o) {
             return o.toInstant();
         }

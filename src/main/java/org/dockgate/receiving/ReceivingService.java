@@ -1,5 +1,7 @@
 package org.dockgate.receiving;
 
+import org.dockgate.platform.CurrentActor;
+
 import java.security.SecureRandom;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
@@ -40,7 +42,6 @@ import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.jdbc.core.JdbcTemplate;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
-import org.springframework.security.core.context.SecurityContextHolder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -130,7 +131,7 @@ public class ReceivingService {
             prepared.add(lot);
         }
         // Two lots of one receipt for the same model share a switching state: the plan of both is the current one.
-        String who = actor();
+        String who = CurrentActor.username();
         var now = OffsetDateTime.now(clock).withOffsetSameInstant(ZoneOffset.UTC);
         long receiptId = insert("insert into receipt (purchase_order, delivery_note, received_on, received_by,"
                 + " supplier_id, client_token, created_at) values (?, ?, ?, ?, ?, ?, ?)", po, note, receivedOn, who,
@@ -546,9 +547,5 @@ public class ReceivingService {
         return String.join(", ", numbers.stream().map(String::valueOf).toList());
     }
 
-    private static String actor() {
-        var auth = SecurityContextHolder.getContext().getAuthentication();
-        return auth == null ? "system" : auth.getName();
-    }
 
 }
