@@ -64,11 +64,16 @@ class ProcedureBrowserTest extends BrowserTestSupport {
         field("value", "45");
         field("reason", "Creep seen on the last lot of this family");
         driver.findElement(By.id("apply-edit")).click();
+        // The draft page comes back after the redirect: wait for its notice before reading the new page.
+        waitUpTo(10).until(ExpectedConditions.textToBePresentInElementLocated(By.tagName("main"),
+                "Changed static.settleSeconds"));
         WebElement edits = waitUpTo(10).until(ExpectedConditions.presenceOfElementLocated(By.id("edits")));
         assertThat(edits.getText()).contains("static.settleSeconds").contains("45").contains("Creep seen");
         screenshot("procedure-draft");
 
         driver.findElement(By.id("approve")).click();
+        waitUpTo(10).until(ExpectedConditions.textToBePresentInElementLocated(By.tagName("main"),
+                "You wrote this draft"));
         WebElement refused = waitUpTo(10).until(ExpectedConditions.presenceOfElementLocated(By.cssSelector(".problem")));
         assertThat(refused.getText()).contains("another engineer");
 
