@@ -113,16 +113,32 @@ class LotCertificateRenderer {
         doc.facts(decision);
 
         doc.section("4 Reference instruments");
+        // The calibration records the frozen results were computed with (in force when the readings were taken),
+        // never the instruments' current ones.
         Set<String> used = new LinkedHashSet<>();
         ev.units().forEach(u -> used.addAll(u.instruments()));
-        PdfPTable refs = table(doc, new float[] {1.2f, 3.2f, 1.6f, 1.2f}, "Identifier", "Description", "Certificate", "Due");
+        Map<String, UnitEvaluationView.CalibrationUsed> records = new LinkedHashMap<>();
+        ev.units().forEach(u -> u.calibrations().forEach(c -> records.putIfAbsent(c.instrument() + " " + c.certificateNumber(), c)));
+        PdfPTable refs = table(doc, new float[] {1.2f, 3.2f, 1.6f, 1.2f, 1.2f}, "Identifier", "Description", "Certificate",
+                "Calibrated", "Due");
         for (String identifier : used) {
-            instruments.find(identifier).ifPresent(v -> {
-                cell(doc, refs, v.identifier());
-                cell(doc, refs, v.description());
-                cell(doc, refs, v.current().certificateNumber());
-                cell(doc, refs, v.current().dueOn().toString());
-            });
+            String description = instruments.find(identifier).map(v -> v.description()).orElse("");
+            List<UnitEvaluationView.CalibrationUsed> ofInstrument = records.values().stream()
+                    .filter(c -> c.instrument().equals(identifier)).toList();
+            if (ofInstrument.isEmpty()) {
+                cell(doc, refs, identifier);
+                cell(doc, refs, description);
+                cell(doc, refs, "not recorded with the results");
+                cell(doc, refs, "—");
+                cell(doc, refs, "—");
+            }
+            for (UnitEvaluationView.CalibrationUsed c : ofInstrument) {
+                cell(doc, refs, identifier);
+                cell(doc, refs, description);
+                cell(doc, refs, c.certificateNumber());
+                cell(doc, refs, c.calibratedOn().toString());
+                cell(doc, refs, c.dueOn().toString());
+            }
         }
         doc.add(refs);
 

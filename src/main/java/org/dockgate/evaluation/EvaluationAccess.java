@@ -21,6 +21,7 @@ class EvaluationAccess {
                         AccessRule.writes("/evaluation/lots/*/concession", Role.SUPERVISOR),
                         AccessRule.writes("/evaluation/**", Role.ENGINEER),
                         AccessRule.reads("/api/v1/lots/*/evaluation", FeatureAccess.everyone()),
+                        AccessRule.reads("/api/v1/lots/*/evaluation/recheck", FeatureAccess.everyone()),
                         AccessRule.writes("/api/v1/lots/*/disposition", Role.ENGINEER),
                         AccessRule.writes("/api/v1/lots/*/concession", Role.SUPERVISOR)));
     }

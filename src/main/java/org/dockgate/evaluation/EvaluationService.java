@@ -15,6 +15,7 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.OptionalDouble;
 import java.util.Set;
+import java.util.function.Function;
 import java.util.stream.Collectors;
 import org.dockgate.audit.AuditEvent;
 import org.dockgate.audit.AuditEvent.FieldChange;
@@ -35,6 +36,7 @@ import org.dockgate.core.evaluation.UnitResult;
 import org.dockgate.core.procedure.SensorSpecification;
 import org.dockgate.core.sampling.SingleSamplingPlans;
 import org.dockgate.instruments.InstrumentService;
+import org.dockgate.instruments.InstrumentView;
 import org.dockgate.procedures.ApprovedProcedure;
 import org.dockgate.procedures.ProcedureService;
 import org.dockgate.receiving.LotState;
@@ -92,19 +94,69 @@ public class EvaluationService {
         if (!lot.sampled(serial)) {
             throw new IllegalArgumentException("The unit " + serial + " is not in the sample of lot " + lotId + ".");
         }
+        Optional<UnitEvaluationView> frozen = frozen(lotId, serial);
+        if (frozen.isPresent()) {
+            return frozen.get();
+        }
         ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
-        return evaluate(lot, procedure, spec(procedure), serial);
+        return evaluate(lot, procedure, spec(procedure), serial, register());
     }
 
+    /**
+     * The lot's evaluation. Once the lot is dispositioned it is the record frozen then (every unit's values,
+     * U, k, ν_eff, limits, p_c, verdicts and calibration records), never a recomputation: a later
+     * calibration, correction or change in the database does not alter it. Before, each unit is computed
+     * from its current readings with the calibrations in force when they were taken.
+     */
     @Transactional(readOnly = true)
     public LotEvaluationView lotEvaluation(long lotId) {
         LotView lot = lot(lotId);
         ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
+        Map<String, UnitEvaluationView> frozen = frozenUnits(lotId);
+        List<UnitEvaluationView> units = frozen.isEmpty() ? recompute(lot, procedure) : new ArrayList<>(frozen.values());
+        return lotView(lot, procedure, units);
+    }
+
+    /**
+     * Recomputes a dispositioned lot's unit results from the stored readings (and the calibration records in
+     * force when they were taken) and compares them, figure by figure, with the results frozen at disposition.
+     * Anyone who may read the lot may run it; it changes nothing.
+     *
+     * @throws IllegalArgumentException for an unknown lot
+     * @throws IllegalStateException    for a lot not yet dispositioned (nothing frozen to compare)
+     */
+    @Transactional(readOnly = true)
+    public Recheck recheck(long lotId) {
+        LotView lot = lot(lotId);
+        Map<String, UnitEvaluationView> frozen = frozenUnits(lotId);
+        if (frozen.isEmpty()) {
+            throw new IllegalStateException("Lot " + lotId + " is not dispositioned yet: there are no frozen results to"
+                    + " compare with.");
+        }
+        ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
+        Map<String, UnitEvaluationView> now = new java.util.LinkedHashMap<>();
+        recompute(lot, procedure).forEach(u -> now.put(u.serial(), u));
+        List<Recheck.Difference> differences = new ArrayList<>();
+        Set<String> serials = new java.util.TreeSet<>(frozen.keySet());
+        serials.addAll(now.keySet());
+        for (String serial : serials) {
+            differences.addAll(Rechecks.compare(serial, frozen.get(serial), now.get(serial), this::canonicalJson));
+        }
+        return new Recheck(lotId, differences.isEmpty(), differences);
+    }
+
+    private List<UnitEvaluationView> recompute(LotView lot, ApprovedProcedure procedure) {
         SensorSpecification spec = spec(procedure);
+        Function<String, Optional<InstrumentView>> register = register();
         List<UnitEvaluationView> units = new ArrayList<>();
         for (String serial : lot.sampledSerials()) {
-            units.add(evaluate(lot, procedure, spec, serial));
+            units.add(evaluate(lot, procedure, spec, serial, register));
         }
+        return units;
+    }
+
+    private LotEvaluationView lotView(LotView lot, ApprovedProcedure procedure, List<UnitEvaluationView> units) {
+        long lotId = lot.id();
         boolean complete = units.stream().allMatch(UnitEvaluationView::complete);
         int nonconforming = LotTally.count(units.stream().map(u -> u.result().unitVerdict().orElse(Verdict.PASS)).toList(),
                 ConditionalCounting.DEFAULT);
@@ -124,7 +176,9 @@ public class EvaluationService {
     public LotEvaluationView disposition(long lotId, DispositionAction actionIfRejected, String notes,
                                          boolean correctiveActionRequested, LocalDate correctiveActionDue,
                                          long expectedLotVersion) {
-        LotEvaluationView evaluation = lotEvaluation(lotId);
+        LotView current = lot(lotId);
+        LotEvaluationView evaluation = lotView(current, procedures.revision(current.procedureRevisionId()).orElseThrow(),
+                recompute(current, procedures.revision(current.procedureRevisionId()).orElseThrow()));
         LotView lot = evaluation.lot();
         if (lot.version() != expectedLotVersion) {
             throw new org.springframework.orm.ObjectOptimisticLockingFailureException("Lot", lotId);
@@ -150,9 +204,10 @@ public class EvaluationService {
         OffsetDateTime now = clock.instant().atOffset(ZoneOffset.UTC);
         for (UnitEvaluationView u : evaluation.units()) {
             jdbc.update("insert into unit_evaluation_snapshot (lot_id, serial, unit_verdict, result_json, operators,"
-                            + " instruments, evaluated_at) values (?, ?, ?, ?, ?, ?, ?)", lotId, u.serial(),
+                            + " instruments, evaluated_at, unit_json) values (?, ?, ?, ?, ?, ?, ?, ?)", lotId, u.serial(),
                     u.result().unitVerdict().orElseThrow().name(), json.writeValueAsString(u.result()),
-                    String.join(",", u.operators()), String.join(",", u.instruments()), now);
+                    String.join(",", u.operators()), String.join(",", u.instruments()), now,
+                    json.writeValueAsString(u));
         }
         if (!result.disposition().accepted()) {
             String failing = evaluation.units().stream()
@@ -236,14 +291,61 @@ public class EvaluationService {
         return json.writeValueAsString(result);
     }
 
-    private UnitEvaluationView evaluate(LotView lot, ApprovedProcedure procedure, SensorSpecification spec, String serial) {
+    private String canonicalJson(Object value) {
+        return json.writeValueAsString(value);
+    }
+
+    /** The frozen record of one unit, if the lot is dispositioned. */
+    private Optional<UnitEvaluationView> frozen(long lotId, String serial) {
+        return Optional.ofNullable(frozenUnits(lotId).get(serial));
+    }
+
+    /**
+     * The unit results frozen at disposition, in the order of the sample, read back from the snapshot rows.
+     * Rows frozen before the whole unit was kept ({@code unit_json} null) give their stored result with the
+     * operators and instruments of the row; their chart points and calibration records were not frozen.
+     */
+    private Map<String, UnitEvaluationView> frozenUnits(long lotId) {
+        Map<String, UnitEvaluationView> out = new java.util.LinkedHashMap<>();
+        jdbc.query("select serial, result_json, unit_json, operators, instruments from unit_evaluation_snapshot"
+                + " where lot_id = ? order by id", rs -> {
+                    String unitJson = rs.getString(3);
+                    UnitEvaluationView view;
+                    if (unitJson != null) {
+                        view = json.readerFor(UnitEvaluationView.class)
+                                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+                                .readValue(unitJson);
+                    } else {
+                        UnitResult result = json.readerFor(UnitResult.class)
+                                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
+                                .readValue(rs.getString(2));
+                        view = new UnitEvaluationView(rs.getString(1), result, 0, split(rs.getString(4)),
+                                split(rs.getString(5)), Optional.empty(), Optional.empty(), List.of(), List.of(), List.of(), true);
+                    }
+                    out.put(rs.getString(1), view.asFrozen());
+                }, lotId);
+        return out;
+    }
+
+    private static Set<String> split(String joined) {
+        return joined == null || joined.isBlank() ? Set.of()
+                : java.util.Arrays.stream(joined.split(",")).collect(Collectors.toCollection(LinkedHashSet::new));
+    }
+
+    /** One look-up of each instrument's register entry (with all its calibration records) per evaluation. */
+    private Function<String, Optional<InstrumentView>> register() {
+        Map<String, Optional<InstrumentView>> cache = new java.util.HashMap<>();
+        return id -> cache.computeIfAbsent(id, instruments::find);
+    }
+
+    private UnitEvaluationView evaluate(LotView lot, ApprovedProcedure procedure, SensorSpecification spec, String serial,
+                                        Function<String, Optional<InstrumentView>> register) {
         List<Reading> readings = bench.currentReadings(lot.id(), serial);
         UnitMeasurements.Builder m = UnitMeasurements.builder();
         List<UnitEvaluationView.StaticPoint> statics = new ArrayList<>();
         List<UnitEvaluationView.SweepPoint> sweep = new ArrayList<>();
-        Set<String> staticInstruments = new LinkedHashSet<>();
-        Set<String> sweepInstruments = new LinkedHashSet<>();
         List<Reading> staticReadings = new ArrayList<>();
+        List<Reading> sweepReadings = new ArrayList<>();
         for (Reading r : readings) {
             switch (r.test()) {
                 case STATIC -> {
@@ -251,37 +353,40 @@ public class EvaluationService {
                     int cycle = r.cycle().orElse(1);
                     m.staticReading(r.point(), r.value(), direction, cycle);
                     statics.add(new UnitEvaluationView.StaticPoint(r.point(), r.value(), direction.name(), cycle));
-                    staticInstruments.add(r.instrument());
                     staticReadings.add(r);
                 }
                 case NOISE -> m.noiseSample(r.value());
                 case SWEEP -> {
                     m.sweepPoint(r.point(), r.value());
                     sweep.add(new UnitEvaluationView.SweepPoint(r.point(), r.value()));
-                    sweepInstruments.add(r.instrument());
+                    sweepReadings.add(r);
                 }
             }
         }
-        Optional<ReferenceUncertainty> staticRef = staticInstruments.stream().findFirst().map(id -> reference(id, spec));
-        Optional<ReferenceUncertainty> sweepRef = sweepInstruments.stream().findFirst().map(id -> reference(id, spec));
+        List<String> problems = new ArrayList<>();
+        Map<String, UnitEvaluationView.CalibrationUsed> used = new java.util.LinkedHashMap<>();
+        // The sweep's reference applies its U at the sweep amplitude, not at the reading's frequency.
+        Optional<ReferenceUncertainty> staticRef = ReferencesInForce.of(staticReadings, register, spec.inputUnit(), true,
+                used, problems);
+        Optional<ReferenceUncertainty> sweepRef = ReferencesInForce.of(sweepReadings, register, spec.inputUnit(), false,
+                used, problems);
         var conditions = bench.conditions(lot.id(), serial);
         MeasurementContext context = new MeasurementContext(staticRef, sweepRef, readoutDigit(staticReadings),
                 conditions.map(c -> Environment.fromAmbient(c.ambientC(), REFERENCE_TEMPERATURE_C)));
         UnitResult result = UnitEvaluation.evaluate(spec, procedure.content(), procedure.settings().policy(),
                 m.context(context).build());
-        Set<String> used = new LinkedHashSet<>(staticInstruments);
-        used.addAll(sweepInstruments);
+        if (!problems.isEmpty()) {
+            List<String> missing = new ArrayList<>(result.missing());
+            missing.addAll(problems);
+            result = new UnitResult(result.metrics(), result.unitVerdict(), false, missing);
+        }
+        Set<String> instrumentsUsed = new LinkedHashSet<>();
+        staticReadings.forEach(r -> instrumentsUsed.add(r.instrument()));
+        sweepReadings.forEach(r -> instrumentsUsed.add(r.instrument()));
         Set<String> operators = readings.stream().map(Reading::recordedBy).collect(Collectors.toCollection(LinkedHashSet::new));
-        return new UnitEvaluationView(serial, result, readings.size(), operators, used,
-                conditions.map(c -> c.ambientC()), conditions.map(c -> c.relativeHumidityPercent()), statics, sweep);
-    }
-
-    /** The reference instrument's U at an input, in the specification's input unit, from the register. */
-    private ReferenceUncertainty reference(String identifier, SensorSpecification spec) {
-        var view = instruments.find(identifier).orElseThrow();
-        String unit = spec.inputUnit();
-        return new ReferenceUncertainty(identifier, x -> instruments.expandedUncertaintyAt(identifier, x, unit),
-                view.current().coverageFactor());
+        return new UnitEvaluationView(serial, result, readings.size(), operators, instrumentsUsed,
+                conditions.map(c -> c.ambientC()), conditions.map(c -> c.relativeHumidityPercent()), statics, sweep,
+                List.copyOf(used.values()), false);
     }
 
     /**

@@ -1,5 +1,6 @@
 package org.dockgate.evaluation;
 
+import java.time.LocalDate;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
@@ -7,11 +8,22 @@ import org.dockgate.core.evaluation.UnitResult;
 
 /**
  * One sampled unit's evaluation: the core's result (metrics, budgets, verdicts, what is missing), with
- * who recorded it, which reference instruments served and the recorded conditions.
+ * who recorded it, which reference instruments served, the calibration record of each that was in force
+ * when its readings were taken, and the recorded conditions.
+ *
+ * @param calibrations the calibration records the readings were evaluated with, one per instrument and
+ *                     certificate (an instrument recalibrated between two readings of the unit appears twice)
+ * @param frozen       true when this is the result frozen at disposition (the record), false when computed
+ *                     now from the stored readings
  */
 public record UnitEvaluationView(String serial, UnitResult result, int readings, Set<String> operators,
                                  Set<String> instruments, Optional<Double> ambientC, Optional<Double> humidityPercent,
-                                 List<StaticPoint> staticPoints, List<SweepPoint> sweepPoints) {
+                                 List<StaticPoint> staticPoints, List<SweepPoint> sweepPoints,
+                                 List<CalibrationUsed> calibrations, boolean frozen) {
+
+    public UnitEvaluationView {
+        calibrations = calibrations == null ? List.of() : List.copyOf(calibrations);
+    }
 
     /** A static reading, for the calibration-curve chart. */
     public record StaticPoint(double input, double output, String direction, int cycle) {
@@ -19,6 +31,20 @@ public record UnitEvaluationView(String serial, UnitResult result, int readings,
 
     /** A sweep reading, for the frequency-response chart. */
     public record SweepPoint(double frequencyHz, double amplitude) {
+    }
+
+    /**
+     * A calibration record of a reference instrument that served the unit's readings: the one in force
+     * when they were taken (entered in the register by then, calibrated on or before that day, not yet due).
+     */
+    public record CalibrationUsed(String instrument, String certificateNumber, LocalDate calibratedOn,
+                                  LocalDate dueOn, double coverageFactor) {
+    }
+
+    /** @return the same evaluation marked as the frozen record */
+    UnitEvaluationView asFrozen() {
+        return new UnitEvaluationView(serial, result, readings, operators, instruments, ambientC, humidityPercent,
+                staticPoints, sweepPoints, calibrations, true);
     }
 
     public boolean complete() {

@@ -106,6 +106,38 @@ public record InstrumentView(String identifier, String description, String quant
      * @throws IllegalArgumentException when the value is not finite, the unit does not fit, or the value lies outside the range
      */
     public double expandedUncertaintyAt(double value, String valueUnit) {
+        return expandedUncertaintyAt(current, value, valueUnit);
+    }
+
+    /**
+     * The calibration in force for a reading taken at an instant: among the records already entered in the
+     * register at that instant ({@code recordedAt} ≤ {@code at}), those calibrated on or before the reading's
+     * day (UTC) and not yet due on it, the latest (by calibration date, then by sequence number). A record
+     * entered later never changes the readings taken before it was entered, even when it is dated earlier.
+     *
+     * @param at when the reading was recorded
+     * @return the record in force, or empty when the instrument had none then
+     */
+    public Optional<CalibrationRecord> calibrationInForce(java.time.Instant at) {
+        LocalDate day = at.atZone(java.time.ZoneOffset.UTC).toLocalDate();
+        return calibrations.stream()
+                .filter(c -> !c.recordedAt().isAfter(at))
+                .filter(c -> c.covers(day))
+                .max(java.util.Comparator.comparing(CalibrationRecord::calibratedOn)
+                        .thenComparingInt(CalibrationRecord::sequenceNo));
+    }
+
+    /**
+     * The expanded uncertainty U of a given calibration record of this instrument at a value, in the value's
+     * unit, computed as {@link #expandedUncertaintyAt(double, String)} does for the current one.
+     *
+     * @param record    one of this instrument's calibration records
+     * @param value     the value, finite
+     * @param valueUnit its unit, of this instrument's kind
+     * @return U in {@code valueUnit}
+     * @throws IllegalArgumentException as {@link #expandedUncertaintyAt(double, String)}
+     */
+    public double expandedUncertaintyAt(CalibrationRecord record, double value, String valueUnit) {
         double inRangeUnit = Units.convert(value, valueUnit, unit);
         double slack = slack();
         if (inRangeUnit < rangeMin - slack || inRangeUnit > rangeMax + slack) {
@@ -113,8 +145,8 @@ public record InstrumentView(String identifier, String description, String quant
                     + Numbers.plain(rangeMax) + " " + unit + "; " + Numbers.plain(value) + " " + valueUnit.strip()
                     + " lies outside it.");
         }
-        UncertaintyBand band = current.bands().stream().filter(b -> inRangeUnit <= b.upTo() + slack).findFirst()
-                .orElse(current.bands().get(current.bands().size() - 1));
+        UncertaintyBand band = record.bands().stream().filter(b -> inRangeUnit <= b.upTo() + slack).findFirst()
+                .orElse(record.bands().get(record.bands().size() - 1));
         double u = band.expandedUncertaintyAt(inRangeUnit, fullScale());
         // An uncertainty is a difference: convert it without the offset of affine (temperature) units.
         return Units.convert(u, unit, valueUnit) - Units.convert(0.0, unit, valueUnit);

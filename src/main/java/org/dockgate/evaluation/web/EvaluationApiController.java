@@ -7,6 +7,7 @@ import org.dockgate.evaluation.DispositionAction;
 import org.dockgate.evaluation.EvaluationService;
 import org.dockgate.evaluation.LotEvaluationView;
 import org.dockgate.evaluation.NonconformanceReport;
+import org.dockgate.evaluation.Recheck;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
@@ -34,6 +35,15 @@ class EvaluationApiController {
     @Operation(summary = "Each sampled unit's metrics, uncertainty budgets and verdicts, and the lot's tally so far")
     LotEvaluationView evaluation(@PathVariable long id) {
         return evaluation.lotEvaluation(id);
+    }
+
+    @GetMapping("/api/v1/lots/{id}/evaluation/recheck")
+    @Operation(summary = "Recompute a dispositioned lot's unit results and compare them with the frozen record",
+            description = "Recomputes every sampled unit from the stored readings and the calibration records in force"
+                    + " when they were taken, and names each figure that differs from the results frozen at disposition"
+                    + " (serial, metric, field, frozen value, recomputed value). Changes nothing.")
+    Recheck recheck(@PathVariable long id) {
+        return evaluation.recheck(id);
     }
 
     @PostMapping("/api/v1/lots/{id}/disposition")

@@ -49,6 +49,18 @@ class EvaluationController {
         return "evaluation/lot";
     }
 
+    @GetMapping("/lots/{id}/recheck")
+    String recheck(@PathVariable long id, Model model) {
+        model.addAttribute("ev", evaluation.lotEvaluation(id));
+        model.addAttribute("actions", DispositionAction.values());
+        try {
+            model.addAttribute("recheck", evaluation.recheck(id));
+        } catch (IllegalStateException e) {
+            model.addAttribute("problem", e.getMessage());
+        }
+        return "evaluation/lot";
+    }
+
     @GetMapping("/lots/{id}/units/{serial}")
     String unit(@PathVariable long id, @PathVariable String serial, Model model) {
         var unit = evaluation.unit(id, serial);
