@@ -155,4 +155,32 @@ class InstrumentViewTest {
             assertThat(Quantity.of(Units.dimensionName(q.referenceUnit()))).as(q.label()).isEqualTo(q);
         }
     }
+
+    @Test
+    void theCalibrationInForceIsTheLatestAlreadyEnteredCalibratedAndNotYetDueAtTheReading() {
+        UncertaintyBand fine = new UncertaintyBand(20, 0.01, UncertaintyMode.PERCENT_OF_READING);
+        UncertaintyBand coarse = new UncertaintyBand(20, 1.0, UncertaintyMode.PERCENT_OF_READING);
+        // A: calibrated 2024-01-10, entered the same day, due 2024-03-01.
+        CalibrationRecord a = new CalibrationRecord(1, "A", LocalDate.of(2024, 1, 10), LocalDate.of(2024, 3, 1), 2.0,
+                List.of(fine), Instant.parse("2024-01-10T12:00:00Z"));
+        // B: calibrated 2024-02-20 but entered only on 2024-02-27 at 14:00.
+        CalibrationRecord b = new CalibrationRecord(2, "B", LocalDate.of(2024, 2, 20), LocalDate.of(2025, 2, 20), 2.0,
+                List.of(coarse), Instant.parse("2024-02-27T14:00:00Z"));
+        InstrumentView v = InstrumentView.of("RI-TEST", "test", "pressure", 0, 20, "bar", List.of(b, a), TODAY, 0);
+
+        // Before B was entered, even on a day B's calibration date covers: A (a record never reaches back).
+        assertThat(v.calibrationInForce(Instant.parse("2024-02-25T09:00:00Z"))).map(CalibrationRecord::certificateNumber).contains("A");
+        assertThat(v.calibrationInForce(Instant.parse("2024-02-27T13:59:59Z"))).map(CalibrationRecord::certificateNumber).contains("A");
+        // From the moment B is entered: B, the latest calibration then in the register.
+        assertThat(v.calibrationInForce(Instant.parse("2024-02-27T14:00:00Z"))).map(CalibrationRecord::certificateNumber).contains("B");
+        // Before A was entered: none. After A was due and before B was entered: none.
+        assertThat(v.calibrationInForce(Instant.parse("2024-01-10T11:00:00Z"))).isEmpty();
+        CalibrationRecord late = new CalibrationRecord(2, "B", LocalDate.of(2024, 3, 5), LocalDate.of(2025, 3, 5), 2.0,
+                List.of(coarse), Instant.parse("2024-03-05T08:00:00Z"));
+        InstrumentView gap = InstrumentView.of("RI-TEST", "test", "pressure", 0, 20, "bar", List.of(late, a), TODAY, 0);
+        assertThat(gap.calibrationInForce(Instant.parse("2024-03-02T10:00:00Z"))).isEmpty();
+        // U of a given record, not the current one: 0.01 % and 1 % of 10 bar.
+        assertThat(v.expandedUncertaintyAt(a, 10, "bar")).isCloseTo(0.001, within(1e-12));
+        assertThat(v.expandedUncertaintyAt(b, 10, "bar")).isCloseTo(0.1, within(1e-12));
+    }
 }
