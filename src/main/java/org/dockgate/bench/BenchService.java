@@ -78,12 +78,15 @@ public class BenchService {
     private final ApplicationEventPublisher events;
     private final Clock clock;
     private final Map<Long, BenchPlan> plans = new ConcurrentHashMap<>();
+    private final TransactionTemplate ownRow;
 
     BenchService(JdbcTemplate jdbc, PlatformTransactionManager transactions, ObjectProvider<LotSource> lots,
                  ProcedureService procedures, CatalogueService catalogue, InstrumentService instruments,
                  ApplicationEventPublisher events, Clock clock) {
         this.jdbc = jdbc;
         this.tx = new TransactionTemplate(transactions);
+        this.ownRow = new TransactionTemplate(transactions);
+        this.ownRow.setPropagationBehavior(org.springframework.transaction.TransactionDefinition.PROPAGATION_REQUIRES_NEW);
         this.lots = lots;
         this.procedures = procedures;
         this.catalogue = catalogue;
@@ -199,6 +202,7 @@ public class BenchService {
         Instant now = clock.instant();
         LocalDate today = LocalDate.ofInstant(now, ZoneOffset.UTC);
         Map<String, InstrumentView> checked = new java.util.HashMap<>();
+        Map<String, Integer> newSlots = new java.util.TreeMap<>();
         List<Reading> saved = new ArrayList<>();
         for (int i = 0; i < inputs.size(); i++) {
             NewReading in = inputs.get(i);
@@ -240,6 +244,7 @@ public class BenchService {
                 }
                 long id = insert(lotId, serial, slot, 0, value, plan.outputUnit(), entered, enteredUnit, iv.identifier(),
                         who, now, token, null, null);
+                newSlots.merge(serial, 1, Integer::sum);
                 events.publishEvent(AuditEvent.of(READING, id, "RECORD", lot.label() + ", " + serial + ", "
                         + plan.describe(slot.slot()) + ": " + Plain.number(value) + " " + plan.outputUnit()
                         + (enteredUnit.equals(plan.outputUnit()) ? "" : " (entered " + Plain.number(entered) + " "
@@ -249,6 +254,7 @@ public class BenchService {
                 throw new IllegalArgumentException(where + e.getMessage(), e);
             }
         }
+        newSlots.forEach((serial, n) -> addProgress(lotId, serial, n));
         return saved;
     }
 
@@ -377,14 +383,87 @@ public class BenchService {
                 String.class, lotId));
     }
 
-    /** Number of points of each unit that have a reading, by serial. */
+    /**
+     * Number of points of each unit that have a reading, by serial: read from {@code bench_unit_progress},
+     * which the transactions saving readings keep up to date (one row per unit, no count over the readings).
+     */
     public Map<String, Integer> progress(long lotId) {
         Map<String, Integer> done = new java.util.HashMap<>();
-        jdbc.query("select serial, count(distinct slot_no) from bench_reading where lot_id = ? group by serial",
+        jdbc.query("select serial, slots_done from bench_unit_progress where lot_id = ?",
                 rs -> {
                     done.put(rs.getString(1), rs.getInt(2));
                 }, lotId);
         return done;
+    }
+
+    /** Points of one unit that have a reading. */
+    public int progress(long lotId, String serial) {
+        List<Integer> done = jdbc.queryForList("select slots_done from bench_unit_progress where lot_id = ? and serial = ?",
+                Integer.class, lotId, serial);
+        return done.isEmpty() ? 0 : done.get(0);
+    }
+
+    /**
+     * Adds newly filled points to a unit's progress, inside the caller's transaction (a rollback takes the
+     * count back with the readings). The unit's row is created on first use in a transaction of its own,
+     * so two first readings of one unit saved at the same time do not collide on it.
+     */
+    void addProgress(long lotId, String serial, int newSlots) {
+        if (newSlots <= 0) {
+            return;
+        }
+        String update = "update bench_unit_progress set slots_done = slots_done + ? where lot_id = ? and serial = ?";
+        if (jdbc.update(update, newSlots, lotId, serial) == 0) {
+            ownRow.executeWithoutResult(status -> {
+                try {
+                    jdbc.update("insert into bench_unit_progress (lot_id, serial, slots_done) values (?, ?, 0)",
+                            lotId, serial);
+                } catch (DuplicateKeyException alreadyThere) {
+                    // created meanwhile by another transaction: fine
+                }
+            });
+            jdbc.update(update, newSlots, lotId, serial);
+        }
+    }
+
+    /** The current readings of a unit's keyed points (static and sweep), without the noise samples. */
+    public List<Reading> currentKeyedReadings(long lotId, String serial, int keyedSlots) {
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where lot_id = ? and serial = ? and slot_no < ?"
+                + " and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)"
+                + " order by slot_no, revision_no", MAPPER, lotId, serial, keyedSlots);
+    }
+
+    /** Current readings of one test of a unit. */
+    public long currentCount(long lotId, String serial, ReadingTest test) {
+        return jdbc.queryForObject("select count(*) from bench_reading r where lot_id = ? and serial = ? and test = ?"
+                + " and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)", Long.class,
+                lotId, serial, test.name());
+    }
+
+    /** Count, min, max, mean and sample standard deviation of each test's current readings of a unit. */
+    public List<SeriesSummary> summaries(long lotId, String serial) {
+        return jdbc.query("select test, count(*), min(reading_value), max(reading_value), avg(reading_value),"
+                + " stddev_samp(reading_value), max(unit) from bench_reading r where lot_id = ? and serial = ?"
+                + " and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)"
+                + " group by test order by test", (rs, n) -> {
+                    double sd = rs.getDouble(6);
+                    boolean hasSd = !rs.wasNull() && rs.getLong(2) > 1;
+                    return new SeriesSummary(ReadingTest.valueOf(rs.getString(1)), rs.getLong(2), rs.getDouble(3),
+                            rs.getDouble(4), rs.getDouble(5), hasSd ? java.util.OptionalDouble.of(sd)
+                            : java.util.OptionalDouble.empty(), rs.getString(7));
+                }, lotId, serial);
+    }
+
+    /** Every reading of a unit counted, corrections and superseded readings included. */
+    public long historyCount(long lotId, String serial) {
+        return jdbc.queryForObject("select count(*) from bench_reading where lot_id = ? and serial = ?", Long.class,
+                lotId, serial);
+    }
+
+    /** One page of {@link #history}: {@code limit} readings from position {@code offset} (0-based). */
+    public List<Reading> history(long lotId, String serial, long offset, int limit) {
+        return jdbc.query("select " + COLUMNS + " from bench_reading r where lot_id = ? and serial = ?"
+                + " order by slot_no, revision_no limit ? offset ?", MAPPER, lotId, serial, limit, offset);
     }
 
     /** One reading by its number. */

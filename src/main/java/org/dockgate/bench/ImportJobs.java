@@ -3,7 +3,13 @@ package org.dockgate.bench;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Set;
+import org.dockgate.platform.DataDirectory;
 import java.nio.file.Path;
 import java.util.Map;
 import java.util.Optional;
@@ -46,7 +52,8 @@ public class ImportJobs {
     public record Job(String id, long lotId, State state, long rowsRead, long bytesRead, long bytesTotal,
                       ImportOutcome outcome, String failure) {
 
-        /** @return 0–100 */
+        /** @return 0–100 (written into the job's JSON as {@code percent}) */
+        @com.fasterxml.jackson.annotation.JsonProperty("percent")
         public int percent() {
             if (state != State.RUNNING) {
                 return 100;
@@ -63,8 +70,65 @@ public class ImportJobs {
         return t;
     });
 
-    ImportJobs(ReadingImport imports) {
+    /** Owner-only: an upload may carry a supplier's data and must not be readable by other local users. */
+    static final Set<PosixFilePermission> OWNER_ONLY = PosixFilePermissions.fromString("rw-------");
+    static final String PREFIX = "dockgate-import-";
+
+    private final Path folder;
+
+    @org.springframework.beans.factory.annotation.Autowired
+    ImportJobs(ReadingImport imports, DataDirectory data) {
+        this(imports, data.folder("tmp"));
+    }
+
+    ImportJobs(ReadingImport imports, Path folder) {
         this.imports = imports;
+        this.folder = folder;
+        restrict(folder, PosixFilePermissions.fromString("rwx------"));
+        removeLeftovers();
+    }
+
+    /** Copies left by a crash (a job's copy is deleted when the job ends) are removed at start. */
+    void removeLeftovers() {
+        try (DirectoryStream<Path> left = Files.newDirectoryStream(folder, PREFIX + "*")) {
+            for (Path p : left) {
+                Files.deleteIfExists(p);
+                log.info("Removed the leftover upload copy {}", p);
+            }
+        } catch (IOException e) {
+            log.warn("Could not clear leftover upload copies in {}: {}", folder, e.getMessage());
+        }
+    }
+
+    /** The upload copied to an owner-only file in Dockgate's own temporary folder. */
+    Path copy(InputStream upload) throws IOException {
+        Path copy = Files.getFileStore(folder).supportsFileAttributeView(PosixFileAttributeView.class)
+                ? Files.createTempFile(folder, PREFIX, ".csv", PosixFilePermissions.asFileAttribute(OWNER_ONLY))
+                : Files.createTempFile(folder, PREFIX, ".csv");
+        try {
+            // Not Files.copy with REPLACE_EXISTING: it would recreate the file with default permissions.
+            try (java.io.OutputStream out = Files.newOutputStream(copy)) {
+                upload.transferTo(out);
+            }
+        } catch (IOException | RuntimeException e) {
+            Files.deleteIfExists(copy);
+            throw e;
+        }
+        return copy;
+    }
+
+    Path folder() {
+        return folder;
+    }
+
+    private static void restrict(Path path, Set<PosixFilePermission> permissions) {
+        try {
+            if (Files.getFileStore(path).supportsFileAttributeView(PosixFileAttributeView.class)) {
+                Files.setPosixFilePermissions(path, permissions);
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException("Cannot restrict " + path, e);
+        }
     }
 
     /**
@@ -79,8 +143,7 @@ public class ImportJobs {
     public Job start(long lotId, InputStream upload, String instrument, boolean preview) {
         Path copy;
         try {
-            copy = Files.createTempFile("dockgate-import-", ".csv");
-            Files.copy(upload, copy, java.nio.file.StandardCopyOption.REPLACE_EXISTING);
+            copy = copy(upload);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }

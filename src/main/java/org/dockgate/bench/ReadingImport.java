@@ -68,7 +68,7 @@ public class ReadingImport {
     public ImportOutcome importFile(long lotId, InputStreamSource file, String instrument, boolean preview,
                                     ImportProgress progress) {
         // First pass: check every row and hash the file, saving nothing (this is the preview).
-        ImportOutcome checked = pass(lotId, file, instrument, null, progress);
+        ImportOutcome checked = pass(lotId, file, instrument, null, progress, new HashMap<>());
         if (preview || !checked.valid()) {
             return checked;
         }
@@ -78,11 +78,13 @@ public class ReadingImport {
                 BenchLot lot = bench.openLot(lotId);
                 long importId = startImport(bench.jdbc(), lotId, checked.fileSha256(), checked.validRows(),
                         instrument.strip(), BenchService.currentUser(), bench.clock().instant());
-                ImportOutcome saved = pass(lotId, file, instrument, importId, progress);
+                Map<String, Integer> newSlots = new java.util.TreeMap<>();
+                ImportOutcome saved = pass(lotId, file, instrument, importId, progress, newSlots);
                 if (!saved.valid() || !saved.fileSha256().equals(checked.fileSha256())) {
                     status.setRollbackOnly();
                     return saved;
                 }
+                newSlots.forEach((serial, n) -> bench.addProgress(lotId, serial, n));
                 bench.events().publishEvent(AuditEvent.of(BenchService.LOT, lotId, "IMPORT", lot.label()
                         + ": imported " + saved.validRows() + " readings with " + instrument.strip()
                         + " from a data-acquisition file, SHA-256 " + saved.fileSha256())
@@ -98,7 +100,7 @@ public class ReadingImport {
 
     /** One pass over the file: checks, and inserts when an import id is given. */
     private ImportOutcome pass(long lotId, InputStreamSource file, String instrumentId, Long importId,
-                               ImportProgress progress) {
+                               ImportProgress progress, Map<String, Integer> newSlots) {
         boolean saving = importId != null;
         BenchLot lot = bench.openLot(lotId);
         BenchPlan plan = bench.planFor(lot);
@@ -151,6 +153,7 @@ public class ReadingImport {
                             row.value(), plan.outputUnit()));
                 }
                 if (saving) {
+                    newSlots.merge(row.serial(), 1, Integer::sum);
                     batch.add(BenchService.row(lotId, row.serial(), slot, 0, row.value(), plan.outputUnit(),
                             row.recordedValue(), unitOf(row, plan), instrument.identifier(), who, now, null, null, null,
                             importId));

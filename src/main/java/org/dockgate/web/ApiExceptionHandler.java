@@ -54,6 +54,11 @@ public class ApiExceptionHandler {
 
     @ExceptionHandler(HttpMessageNotReadableException.class)
     ResponseEntity<ProblemDetail> unreadable(HttpMessageNotReadableException e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof JsonBodyLimitFilter.BodyTooLargeException tooLarge) {
+                return bodyTooLarge(tooLarge);
+            }
+        }
         return problem(HttpStatus.BAD_REQUEST, JsonProblems.describe(e));
     }
 
@@ -113,6 +118,11 @@ public class ApiExceptionHandler {
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ResponseEntity<ProblemDetail> tooLarge(MaxUploadSizeExceededException e) {
         return problem(HttpStatus.CONTENT_TOO_LARGE, "The upload is larger than the server accepts.");
+    }
+
+    @ExceptionHandler(JsonBodyLimitFilter.BodyTooLargeException.class)
+    ResponseEntity<ProblemDetail> bodyTooLarge(JsonBodyLimitFilter.BodyTooLargeException e) {
+        return problem(HttpStatus.CONTENT_TOO_LARGE, e.getMessage());
     }
 
     @ExceptionHandler(AccessDeniedException.class)

@@ -88,20 +88,38 @@ class BenchController {
         return "redirect:/bench";
     }
 
+    /** Readings per page of the unit's history table. */
+    static final int PAGE_SIZE = 200;
+
+    /** One link of the history table's pager. */
+    public record PageLink(int number, String href, boolean current) {
+    }
+
     @GetMapping("/bench/lots/{lotId}/units/{serial}")
-    String unit(@PathVariable long lotId, @PathVariable String serial, Model model) {
+    String unit(@PathVariable long lotId, @PathVariable String serial, @RequestParam(defaultValue = "1") int page,
+                Model model) {
         BenchLot lot = bench.lot(lotId).orElseThrow(() -> new ResponseStatusException(HttpStatus.NOT_FOUND));
         if (!lot.sampledSerials().contains(serial)) {
             throw new ResponseStatusException(HttpStatus.NOT_FOUND);
         }
         BenchPlan plan = bench.planFor(lot);
-        List<Reading> current = bench.currentReadings(lotId, serial);
+        // Only the keyed points are loaded one by one; the noise samples (tens of thousands) are counted,
+        // summarised and shown a page at a time.
+        List<Reading> current = bench.currentKeyedReadings(lotId, serial, plan.keyed().size());
         Map<Integer, Reading> bySlot = new HashMap<>();
-        long noiseDone = 0;
         for (Reading r : current) {
             bySlot.put(r.slot(), r);
-            if (r.test() == ReadingTest.NOISE) {
-                noiseDone++;
+        }
+        long noiseDone = plan.noiseSamples() > 0 ? bench.currentCount(lotId, serial, ReadingTest.NOISE) : 0;
+        long historyCount = bench.historyCount(lotId, serial);
+        int pages = (int) Math.max(1, (historyCount + PAGE_SIZE - 1) / PAGE_SIZE);
+        int shown = Math.min(Math.max(page, 1), pages);
+        List<PageLink> pageLinks = new ArrayList<>();
+        if (pages > 1) {
+            for (int p = 1; p <= pages; p++) {
+                if (p == 1 || p == pages || Math.abs(p - shown) <= 3 || p % 50 == 0) {
+                    pageLinks.add(new PageLink(p, unitPath(lotId, serial) + "?page=" + p + "#history-section", p == shown));
+                }
             }
         }
         String pageToken = UUID.randomUUID().toString();
@@ -124,12 +142,19 @@ class BenchController {
         model.addAttribute("plan", plan);
         model.addAttribute("rows", rows);
         model.addAttribute("firstEmpty", firstEmpty);
-        model.addAttribute("done", current.stream().map(Reading::slot).distinct().count());
+        model.addAttribute("done", bench.progress(lotId, serial));
         model.addAttribute("noiseDone", noiseDone);
         model.addAttribute("instruments", instruments);
         model.addAttribute("chosenInstrument", chosen);
         model.addAttribute("conditions", bench.conditions(lotId, serial).orElse(null));
-        model.addAttribute("history", bench.history(lotId, serial));
+        model.addAttribute("history", bench.history(lotId, serial, (long) (shown - 1) * PAGE_SIZE, PAGE_SIZE));
+        model.addAttribute("historyCount", historyCount);
+        model.addAttribute("historyFrom", historyCount == 0 ? 0 : (long) (shown - 1) * PAGE_SIZE + 1);
+        model.addAttribute("historyTo", Math.min(historyCount, (long) shown * PAGE_SIZE));
+        model.addAttribute("page", shown);
+        model.addAttribute("pages", pages);
+        model.addAttribute("pageLinks", pageLinks);
+        model.addAttribute("summaries", bench.summaries(lotId, serial));
         model.addAttribute("open", lot.awaitingMeasurement());
         model.addAttribute("unitPath", unitPath(lotId, serial));
         return UNIT;
@@ -178,6 +203,24 @@ class BenchController {
             redirect.addFlashAttribute("problem", e.getMessage());
         }
         return "redirect:" + unitPath(lotId, serial);
+    }
+
+    /** The correction form of one reading, opened from its "Correct" link. */
+    @GetMapping("/bench/lots/{lotId}/units/{serial}/readings/{readingId}/correct")
+    String correctionForm(@PathVariable long lotId, @PathVariable String serial, @PathVariable long readingId,
+                          Model model) {
+        BenchLot lot = bench.lot(lotId).orElseThrow(() -> new ResponseStatusException(HttpStatus.NOT_FOUND));
+        Reading reading = bench.reading(readingId)
+                .filter(r -> r.lotId() == lotId && r.serial().equals(serial))
+                .orElseThrow(() -> new ResponseStatusException(HttpStatus.NOT_FOUND));
+        BenchPlan plan = bench.planFor(lot);
+        model.addAttribute("lot", lot);
+        model.addAttribute("serial", serial);
+        model.addAttribute("reading", reading);
+        model.addAttribute("point", plan.describe(reading.slot()));
+        model.addAttribute("open", lot.awaitingMeasurement());
+        model.addAttribute("unitPath", unitPath(lotId, serial));
+        return "bench/correct";
     }
 
     @PostMapping("/bench/lots/{lotId}/units/{serial}/corrections")

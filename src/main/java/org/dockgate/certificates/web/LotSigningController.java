@@ -1,6 +1,5 @@
 package org.dockgate.certificates.web;
 
-import io.swagger.v3.oas.annotations.Operation;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import org.dockgate.certificates.IssuedCertificate;
 import org.dockgate.certificates.LotCertificateService;
@@ -10,10 +9,8 @@ import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
-import org.springframework.web.bind.annotation.RequestBody;
 import org.springframework.web.bind.annotation.RequestMapping;
 import org.springframework.web.bind.annotation.RequestParam;
-import org.springframework.web.bind.annotation.ResponseBody;
 import org.springframework.web.servlet.mvc.support.RedirectAttributes;
 
 /** Approve and sign a dispositioned lot's certificate, re-entering the password; reissue with a reason. */
@@ -62,17 +59,5 @@ class LotSigningController {
             redirect.addFlashAttribute("problem", e.getMessage());
             return "redirect:/certificates/lots/" + id;
         }
-    }
-
-    record SignRequest(String password) {
-    }
-
-    @PostMapping("/api/v1/lots/{id}/certificates")
-    @ResponseBody
-    @Operation(summary = "Approve and sign a dispositioned lot's certificate (ENGINEER or SUPERVISOR)",
-            description = "The password is checked again at the moment of signing; whoever recorded readings of the"
-                    + " lot cannot sign it. Returns the register entry; the PDF is at /api/v1/certificates/{number}/pdf.")
-    IssuedCertificate signApi(@PathVariable long id, @RequestBody SignRequest request) {
-        return certificates.approveAndSign(id, request == null ? null : request.password());
     }
 }
