@@ -6,6 +6,7 @@ import static org.hamcrest.Matchers.hasItem;
 import static org.hamcrest.Matchers.not;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.httpBasic;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.multipart;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.content;
 import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
@@ -129,6 +130,14 @@ class RegisterTamperVerificationTest {
                         .andExpect(content().string(not(containsString("Signed by Someone Else"))))
                         .andExpect(content().string(containsString("id=\"register-disagreements\"")))
                         .andExpect(content().string(containsString("data-field=\"signer\"")))
+                        .andExpect(content().string(containsString("the register says &quot;Someone Else&quot;")));
+                // The QR code's page checks the register's stored copy against the entry in the same way.
+                mvc.perform(get("/verify/{n}", issued.certificateNumber()))
+                        .andExpect(status().isOk())
+                        .andExpect(content().string(not(containsString("Issued and current"))))
+                        .andExpect(content().string(containsString("id=\"register-disagreements\"")))
+                        .andExpect(content().string(containsString("data-field=\"signer\"")))
+                        .andExpect(content().string(containsString("<dd>" + signedBy + "</dd>")))
                         .andExpect(content().string(containsString("the register says &quot;Someone Else&quot;")));
             } catch (Exception e) {
                 throw new AssertionError(e);
