@@ -52,10 +52,14 @@ import org.springframework.transaction.annotation.Transactional;
  *       RFC 5652 5.4 and 5.6) and names its certificate with signing-certificate-v2 (RFC 5035);</li>
  *   <li>the signer's certificate allows signing and chains to this lab's CA or a trusted imported CA at
  *       the signing time, and the signer's rights were not revoked before that time;</li>
- *   <li>the register holds this very file (certificate number, SHA-256, same signer) and has not marked it
- *       superseded.</li>
+ *   <li>the register holds this very file and has not marked it superseded, and its entry agrees with what the
+ *       signed document says: certificate number, SHA-256 and size (of the file and of the register's stored
+ *       copy), the signer's certificate, the signer's name ({@code /Name}), the signing time ({@code /M}) and
+ *       the meaning ({@code /Reason}). Every disagreement is named; any one makes the file not valid.</li>
  * </ol>
- * Nothing the file says is trusted before it is checked; no input makes this throw.
+ * The signer reported is the subject CN of the signing certificate inside the CMS, never the register's
+ * name: a register altered behind the application's back must not speak for the document. Nothing the file
+ * says is trusted before it is checked; no input makes this throw.
  */
 @Service
 public class CertificateVerifier {
@@ -96,7 +100,7 @@ public class CertificateVerifier {
             reader = new PdfReader(file);
         } catch (IOException | RuntimeException e) {
             outcome.fail("PDF", "The file is not a readable PDF document.");
-            registerCheck(outcome, sha256, null, null, null);
+            registerCheck(outcome, file, sha256, Claims.NONE, null);
             return;
         }
         try {
@@ -106,7 +110,7 @@ public class CertificateVerifier {
             List<String> names = fields.getSignedFieldNames();
             if (names.isEmpty()) {
                 outcome.fail("Signature", "The document carries no digital signature.");
-                registerCheck(outcome, sha256, claimedNumber, null, null);
+                registerCheck(outcome, file, sha256, Claims.number(claimedNumber), null);
                 return;
             }
             if (names.size() > 1) {
@@ -119,21 +123,23 @@ public class CertificateVerifier {
             if (subFilter == null || !SigningService.SUB_FILTER.equals(PdfName.decodeName(subFilter.toString()))) {
                 outcome.fail("Signature", "The signature is not a PAdES signature (sub-filter " + subFilter
                         + " instead of /" + SigningService.SUB_FILTER + ").");
-                registerCheck(outcome, sha256, claimedNumber, null, null);
+                registerCheck(outcome, file, sha256, Claims.number(claimedNumber), null);
                 return;
             }
             Instant claimedTime = signingTime(dictionary);
+            Claims claims = new Claims(claimedNumber, claimedTime, text(dictionary, PdfName.NAME),
+                    text(dictionary, PdfName.REASON));
             long[] range = byteRange(dictionary);
             byte[] signedBytes = coverage(file, range, outcome);
             if (signedBytes == null) {
-                registerCheck(outcome, sha256, claimedNumber, null, claimedTime);
+                registerCheck(outcome, file, sha256, claims, null);
                 return;
             }
             // Validate the certificate path at the register's signing time when the register knows this file;
             // else at the time the signature claims (/M), which is all a stranger's file offers.
             Instant at = register.findBySha256(sha256).map(IssuedCertificate::signedAt).orElse(claimedTime);
             X509Certificate signer = cms(file, range, signedBytes, at, outcome);
-            registerCheck(outcome, sha256, claimedNumber, signer, claimedTime);
+            registerCheck(outcome, file, sha256, claims, signer);
             if (signer != null) {
                 revocationCheck(outcome, signer);
             }
@@ -298,39 +304,104 @@ public class CertificateVerifier {
         }
     }
 
-    private void registerCheck(Outcome outcome, String sha256, String claimedNumber, X509Certificate signer,
-                               Instant claimedTime) {
+    /**
+     * What the document says about itself: the number in its document information and, from the signature
+     * dictionary (inside the signed byte range), the signing time, the signer's name and the meaning.
+     */
+    private record Claims(String number, Instant signedAt, String signerName, String meaning) {
+        static final Claims NONE = new Claims(null, null, null, null);
+
+        static Claims number(String number) {
+            return new Claims(number, null, null, null);
+        }
+    }
+
+    private void registerCheck(Outcome outcome, byte[] file, String sha256, Claims claims, X509Certificate signer) {
+        outcome.claimedSignedAt = claims.signedAt();
         Optional<IssuedCertificate> bySha = register.findBySha256(sha256);
         if (bySha.isPresent()) {
             IssuedCertificate entry = bySha.get();
             outcome.number = entry.certificateNumber();
-            outcome.signerFromRegister = entry.signerName();
             outcome.signedAt = entry.signedAt();
-            if (claimedNumber != null && !claimedNumber.equals(entry.certificateNumber())) {
-                outcome.fail("Register", "The document calls itself " + claimedNumber + " but is registered as "
-                        + entry.certificateNumber() + ".");
-            } else if (signer != null && !X509s.fingerprint(signer).equals(entry.signerCertificateSha256())) {
-                outcome.fail("Register", "The register records another signer for " + entry.certificateNumber() + ".");
-            } else {
-                outcome.pass("Register", "The register holds this exact file as certificate " + entry.certificateNumber()
-                        + ", signed by " + entry.signerName() + " on " + entry.signedAt() + " (SHA-256 " + sha256 + ").");
-            }
+            compare(outcome, entry, file, sha256, claims, signer);
             supersession(outcome, entry);
             return;
         }
-        outcome.signedAt = claimedTime;
+        outcome.signedAt = claims.signedAt();
+        String claimedNumber = claims.number();
         Optional<IssuedCertificate> byNumber = claimedNumber == null ? Optional.empty() : register.find(claimedNumber);
-        if (byNumber.isPresent()) {
-            outcome.number = claimedNumber;
-            outcome.fail("Register", "This file is not the certificate registered as " + claimedNumber
-                    + ": its SHA-256 (" + sha256 + ") differs from the register's (" + byNumber.get().pdfSha256() + ").");
-            supersession(outcome, byNumber.get());
-        } else {
-            outcome.number = claimedNumber;
+        outcome.number = claimedNumber;
+        if (byNumber.isEmpty()) {
             outcome.fail("Register", claimedNumber == null
                     ? "No certificate in the register has this file's SHA-256 (" + sha256 + ")."
                     : "There is no certificate " + claimedNumber + " in the register.");
+            return;
         }
+        IssuedCertificate entry = byNumber.get();
+        boolean storedCopyIsThisFile = register.pdf(entry.certificateNumber()).map(X509s::sha256Hex)
+                .filter(sha256::equals).isPresent();
+        if (storedCopyIsThisFile) {
+            // The register keeps this very file but records another SHA-256 for it: the entry was altered.
+            outcome.signedAt = entry.signedAt();
+            compare(outcome, entry, file, sha256, claims, signer);
+        } else {
+            outcome.fail("Register", "This file is not the certificate registered as " + claimedNumber
+                    + ": its SHA-256 (" + sha256 + ") differs from the register's (" + entry.pdfSha256() + ").");
+        }
+        supersession(outcome, entry);
+    }
+
+    /** Compares the register's entry for this file with what the file and its signature say, field by field. */
+    private void compare(Outcome outcome, IssuedCertificate entry, byte[] file, String sha256, Claims claims,
+                         X509Certificate signer) {
+        List<VerificationResult.Disagreement> found = new ArrayList<>();
+        disagree(found, "certificateNumber", "certificate number", claims.number(), entry.certificateNumber());
+        disagree(found, "sha256", "SHA-256", sha256, entry.pdfSha256());
+        String stored = register.pdf(entry.certificateNumber()).map(X509s::sha256Hex).orElse("none");
+        if (!stored.equals(sha256)) {
+            disagree(found, "storedCopy", "SHA-256 of the register's stored copy", sha256, stored);
+        }
+        disagree(found, "size", "size in bytes", String.valueOf(file.length), String.valueOf(entry.pdfSize()));
+        if (signer != null) {
+            disagree(found, "signerCertificate", "SHA-256 of the signer's certificate", X509s.fingerprint(signer),
+                    entry.signerCertificateSha256());
+        }
+        // The signer's name as signed into the signature dictionary (what Dockgate writes there is the name the
+        // register records); a signature without /Name is compared by its certificate's CN.
+        String signedName = claims.signerName() != null ? claims.signerName() : outcome.signerFromCertificate;
+        disagree(found, "signer", "signer", signedName, entry.signerName());
+        disagree(found, "signedAt", "signing time", claims.signedAt() == null ? null : claims.signedAt().toString(),
+                entry.signedAt() == null ? null : entry.signedAt().toString());
+        disagree(found, "meaning", "meaning of the signature", claims.meaning(), entry.meaning());
+        if (found.isEmpty()) {
+            outcome.pass("Register", "The register holds this exact file as certificate " + entry.certificateNumber()
+                    + ", signed by " + entry.signerName() + " on " + entry.signedAt() + " (SHA-256 " + sha256
+                    + "), and agrees with the document on number, size, signer, signing certificate, time and meaning.");
+            return;
+        }
+        for (VerificationResult.Disagreement d : found) {
+            outcome.disagreements.add(d);
+            outcome.fail("Register", "The register disagrees with the document about the " + d.label() + " of "
+                    + entry.certificateNumber() + ": the document says " + quoted(d.document()) + ", the register says "
+                    + quoted(d.register()) + ".");
+        }
+    }
+
+    /** Records a disagreement when the document states a value and the register's differs. */
+    private static void disagree(List<VerificationResult.Disagreement> found, String field, String label,
+                                 String document, String register) {
+        if (document != null && !document.equals(register)) {
+            found.add(new VerificationResult.Disagreement(field, label, document, register));
+        }
+    }
+
+    private static String quoted(String value) {
+        return value == null ? "nothing" : "\"" + value + "\"";
+    }
+
+    private static String text(PdfDictionary dictionary, PdfName key) {
+        PdfObject value = PdfReader.getPdfObject(dictionary.get(key));
+        return value instanceof PdfString string ? string.toUnicodeString() : null;
     }
 
     private static void supersession(Outcome outcome, IssuedCertificate entry) {
@@ -397,9 +468,10 @@ public class CertificateVerifier {
     private static final class Outcome {
         private final List<VerificationResult.Check> checks = new ArrayList<>();
         private String number;
-        private String signerFromRegister;
+        private final List<VerificationResult.Disagreement> disagreements = new ArrayList<>();
         private String signerFromCertificate;
         private Instant signedAt;
+        private Instant claimedSignedAt;
         private boolean superseded;
         private String supersededBy;
 
@@ -415,9 +487,9 @@ public class CertificateVerifier {
             List<String> reasons = checks.stream().filter(c -> !c.passed()).map(VerificationResult.Check::detail).toList();
             boolean valid = reasons.isEmpty() && checks.stream().anyMatch(c -> c.name().equals("Integrity") && c.passed())
                     && checks.stream().anyMatch(c -> c.name().equals("Register") && c.passed());
-            return new VerificationResult(valid, reasons, checks, number,
-                    signerFromRegister != null ? signerFromRegister : signerFromCertificate, signedAt, superseded,
-                    supersededBy);
+            // Signer and time as the signature states them, never as the register does.
+            return new VerificationResult(valid, reasons, checks, disagreements, number, signerFromCertificate,
+                    claimedSignedAt != null ? claimedSignedAt : signedAt, superseded, supersededBy);
         }
     }
 }

@@ -57,11 +57,15 @@ class CertificatesApiController {
     }
 
     /** The verification outcome: the fields of issue 6. */
-    record VerificationResponse(boolean valid, List<String> reasons, String certificateNumber, String signer,
-                                Instant signedAt, boolean superseded) {
+    record VerificationResponse(boolean valid, List<String> reasons, String certificateNumber,
+                                @Schema(description = "subject CN of the signing certificate in the signature")
+                                String signer,
+                                Instant signedAt, boolean superseded,
+                                @Schema(description = "fields on which the register contradicts the document")
+                                List<VerificationResult.Disagreement> disagreements) {
         static VerificationResponse of(VerificationResult r) {
             return new VerificationResponse(r.valid(), r.reasons(), r.certificateNumber(), r.signer(), r.signedAt(),
-                    r.superseded());
+                    r.superseded(), r.disagreements());
         }
     }
 
@@ -108,17 +112,25 @@ class CertificatesApiController {
             description = "Checks that the signature is cryptographically valid, covers the whole document, was made"
                     + " with a certificate issued by this lab's CA (or a trusted imported CA) by someone whose signing"
                     + " rights were not revoked at the time, and that the file is the one in the register (number,"
-                    + " SHA-256) and not superseded. Any file gets an answer: one that is not a PDF is simply not valid.",
+                    + " SHA-256) and not superseded. The signer is the subject CN of the signing certificate in the"
+                    + " signature; where the register's entry contradicts the document (number, SHA-256, size, signer,"
+                    + " signing certificate, time, meaning) the field is listed under disagreements and the file is not"
+                    + " valid. Any file gets an answer: one that is not a PDF is simply not valid.",
             responses = @ApiResponse(responseCode = "200", content = @Content(mediaType = "application/json",
                     schema = @Schema(implementation = VerificationResponse.class),
                     examples = {@ExampleObject(name = "valid", value = """
                             {"valid":true,"reasons":[],"certificateNumber":"DG-2026-000123","signer":"Rui Almeida",
-                             "signedAt":"2026-03-04T14:05:09Z","superseded":false}"""),
+                             "signedAt":"2026-03-04T14:05:09Z","superseded":false,"disagreements":[]}"""),
                         @ExampleObject(name = "tampered", value = """
                             {"valid":false,"reasons":["The document was changed after it was signed: its digest does not match the signed digest.",
                              "No certificate in the register has this file's SHA-256 (9a1e…)."],
                              "certificateNumber":"DG-2026-000123","signer":"Rui Almeida","signedAt":"2026-03-04T14:05:09Z",
-                             "superseded":false}""")})))
+                             "superseded":false,"disagreements":[]}"""),
+                        @ExampleObject(name = "register altered", value = """
+                            {"valid":false,"reasons":["The register disagrees with the document about the signer of DG-2026-000123: the document says \\"Rui Almeida\\", the register says \\"Someone Else\\"."],
+                             "certificateNumber":"DG-2026-000123","signer":"Rui Almeida","signedAt":"2026-03-04T14:05:09Z",
+                             "superseded":false,"disagreements":[{"field":"signer","label":"signer",
+                             "document":"Rui Almeida","register":"Someone Else"}]}""")})))
     VerificationResponse verify(@Parameter(description = "the PDF to check") @RequestPart(name = "file") MultipartFile file) {
         if (file.isEmpty()) {
             throw new IllegalArgumentException("The upload part 'file' is empty.");

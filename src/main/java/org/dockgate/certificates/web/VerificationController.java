@@ -68,8 +68,12 @@ class VerificationController {
     String entry(@PathVariable String certificateNumber, Model model,
                  jakarta.servlet.http.HttpServletResponse response) {
         model.addAttribute("number", certificateNumber);
-        register.find(certificateNumber).ifPresentOrElse(c -> model.addAttribute("c", c),
-                () -> response.setStatus(HttpStatus.NOT_FOUND.value()));
+        register.find(certificateNumber).ifPresentOrElse(c -> {
+            model.addAttribute("c", c);
+            // Check the register's stored copy against its own entry: an entry altered behind the
+            // application's back shows here as a disagreement, and the signer shown is the signature's.
+            register.pdf(c.certificateNumber()).ifPresent(pdf -> model.addAttribute("check", verifier.verify(pdf)));
+        }, () -> response.setStatus(HttpStatus.NOT_FOUND.value()));
         return "certificates/public-entry";
     }
 
