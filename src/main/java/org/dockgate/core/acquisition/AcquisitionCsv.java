@@ -486,6 +486,11 @@ public final class AcquisitionCsv {
 
     private static Object lookUp(String unit, String target) {
         try {
+            Units.requireWellFormed(unit);
+        } catch (IllegalArgumentException e) {
+            return e.getMessage(); // names the character or length, with the text made printable
+        }
+        try {
             Units.parse(unit);
         } catch (IllegalArgumentException e) {
             return "'" + unit + "' is not a unit Dockgate knows";

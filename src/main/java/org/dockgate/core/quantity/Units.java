@@ -83,6 +83,23 @@ public final class Units {
 
     private static final Map<String, Unit<?>> PARSED = new ConcurrentHashMap<>();
     private static final Map<String, UnitConverter> CONVERTERS = new ConcurrentHashMap<>();
+    /**
+     * The caches keep at most this many entries: a lab uses a few dozen units, while a file with a
+     * different nonsense unit on every row must not fill the heap. Beyond it, units are parsed each time.
+     */
+    static final int CACHE_LIMIT = 512;
+    /** The longest unit text accepted; the longest in use ("mV/V", "m/s2", "[psi]"…) is far shorter. */
+    public static final int MAX_SYMBOL_LENGTH = 32;
+    /**
+     * Characters a unit may contain: ASCII letters and digits, UCUM's operators and brackets, and the
+     * engineer's spellings listed in the class description. Anything else (accented letters, currency
+     * signs, byte-order marks, replacement characters, direction overrides, UCUM's {annotations}) is
+     * refused before the parser sees it: the UCUM parser answers some of them with a
+     * {@code java.lang.Error} instead of a parse exception.
+     */
+    private static final String ALLOWED_NON_ASCII = "²³⁻¹·×µμ°℃℉Ω";
+    /** Exponents and factors longer than this many digits make the parser recurse (mV6000: stack overflow). */
+    private static final int MAX_DIGIT_RUN = 2;
 
     private Units() {
     }
@@ -100,6 +117,7 @@ public final class Units {
         if (symbol == null || symbol.isBlank()) {
             throw new IllegalArgumentException("A unit symbol must not be empty");
         }
+        requireWellFormed(symbol);
         String s = symbol.strip()
                 .replace('²', '2').replace('³', '3').replace("⁻", "-").replace('¹', '1')
                 .replace('·', '.').replace('*', '.').replace('×', '.')
@@ -134,16 +152,92 @@ public final class Units {
      */
     public static Unit<?> parse(String symbol) {
         String ucum = toUcum(symbol);
-        return PARSED.computeIfAbsent(ucum, code -> {
-            try {
-                return UCUM.parse(code);
-            } catch (MeasurementParseException e) {
-                throw new IllegalArgumentException("Unknown unit '" + symbol + "'", e);
-            } catch (RuntimeException e) {
-                // The UCUM parser reports some malformed codes with its own unchecked exceptions.
-                throw new IllegalArgumentException("Unknown unit '" + symbol + "'", e);
+        Unit<?> cached = PARSED.get(ucum);
+        if (cached != null) {
+            return cached;
+        }
+        Unit<?> parsed = parseUcum(ucum, symbol);
+        if (PARSED.size() < CACHE_LIMIT) {
+            PARSED.putIfAbsent(ucum, parsed);
+        }
+        return parsed;
+    }
+
+    private static Unit<?> parseUcum(String code, String symbol) {
+        try {
+            return UCUM.parse(code);
+        } catch (MeasurementParseException e) {
+            throw unknown(symbol, e);
+        } catch (RuntimeException e) {
+            // The UCUM parser reports some malformed codes with its own unchecked exceptions.
+            throw unknown(symbol, e);
+        } catch (StackOverflowError e) {
+            throw unknown(symbol, e);
+        } catch (VirtualMachineError e) {
+            throw e; // out of memory and the like are not about the unit
+        } catch (Error e) {
+            // The parser's token manager throws an Error (TokenMgrError) on characters it has no rule for.
+            throw unknown(symbol, e);
+        }
+    }
+
+    private static IllegalArgumentException unknown(String symbol, Throwable cause) {
+        return new IllegalArgumentException("Unknown unit '" + printable(symbol) + "'", cause);
+    }
+
+    /**
+     * Refuses unit text that is too long, holds a character no unit needs, has unbalanced brackets or
+     * a run of more than two digits, with a message that names the problem.
+     *
+     * @param symbol the unit text as typed
+     * @throws IllegalArgumentException when the text cannot be a unit
+     */
+    public static void requireWellFormed(String symbol) {
+        if (symbol.length() > MAX_SYMBOL_LENGTH) {
+            throw new IllegalArgumentException("A unit must be at most " + MAX_SYMBOL_LENGTH
+                    + " characters long, got " + symbol.length());
+        }
+        int depth = 0;
+        int digits = 0;
+        for (int i = 0; i < symbol.length(); i++) {
+            char c = symbol.charAt(i);
+            boolean ascii = (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9')
+                    || "./()[]+-%*_ '".indexOf(c) >= 0;
+            if (!ascii && ALLOWED_NON_ASCII.indexOf(c) < 0) {
+                throw new IllegalArgumentException("Unit '" + printable(symbol) + "' contains a character that is"
+                        + " not allowed in a unit: " + String.format("U+%04X", (int) c));
+            }
+            digits = Character.isDigit(c) ? digits + 1 : 0;
+            if (digits > MAX_DIGIT_RUN) {
+                throw new IllegalArgumentException("Unit '" + printable(symbol) + "' has a number of more than "
+                        + MAX_DIGIT_RUN + " digits; exponents are small integers such as 2 or -1");
+            }
+            if (c == '[' || c == '(') {
+                depth++;
+            } else if (c == ']' || c == ')') {
+                depth--;
+                if (depth < 0) {
+                    break;
+                }
+            }
+        }
+        if (depth != 0) {
+            throw new IllegalArgumentException("Unit '" + printable(symbol) + "' has unbalanced brackets");
+        }
+    }
+
+    /** The text with characters that would garble a message (controls, direction overrides) escaped. */
+    private static String printable(String text) {
+        StringBuilder out = new StringBuilder();
+        text.codePoints().limit(MAX_SYMBOL_LENGTH + 8L).forEach(cp -> {
+            if (Character.isISOControl(cp) || Character.getType(cp) == Character.FORMAT
+                    || cp == 0xFFFD || Character.getType(cp) == Character.UNASSIGNED) {
+                out.append(String.format("\\u%04X", cp));
+            } else {
+                out.appendCodePoint(cp);
             }
         });
+        return out.toString();
     }
 
     /**
@@ -217,7 +311,9 @@ public final class Units {
         } catch (IncommensurableException | UnconvertibleException e) {
             throw new IllegalArgumentException("Unit '" + from + "' cannot be converted to '" + to + "'", e);
         }
-        CONVERTERS.putIfAbsent(key, built);
+        if (CONVERTERS.size() < CACHE_LIMIT) {
+            CONVERTERS.putIfAbsent(key, built);
+        }
         return built;
     }
 
@@ -231,6 +327,11 @@ public final class Units {
      */
     public static String dimensionName(String symbol) {
         return describe(parse(symbol).getDimension());
+    }
+
+    /** How many parsed units and converters are cached (for the test of the bound). */
+    static int cachedEntries() {
+        return PARSED.size() + CONVERTERS.size();
     }
 
     private static String describe(Dimension dimension) {

@@ -87,6 +87,24 @@ class AcquisitionCsvTest {
     }
 
     @Test
+    void unitTextThatCrashedTheParserIsALineAndColumnError() {
+        // Each of these made the UCUM parser throw a java.lang.Error (or overflow the stack): a whole import failed.
+        List<String> nasty = List.of("mV\u00e9", "\u20ac", "\ufeffmV", "mV\ufffd", "m\u202eV", "[", "{", "mV6000");
+        StringBuilder csv = new StringBuilder(AcquisitionCsv.HEADER).append('\n');
+        for (String unit : nasty) {
+            csv.append("SN-1,STATIC,0,UP,1,1.5,").append(unit).append('\n');
+        }
+        csv.append("SN-1,STATIC,0,UP,1,1.5,mV\n");
+        Parsed p = parse(csv.toString());
+        assertThat(p.report().errors()).hasSize(nasty.size());
+        for (int i = 0; i < nasty.size(); i++) {
+            assertThat(p.report().errors().get(i).line()).isEqualTo(i + 2);
+            assertThat(p.report().errors().get(i).column()).contains("unit");
+        }
+        assertThat(p.report().readingsAccepted()).isEqualTo(1);
+    }
+
+    @Test
     void oneBadRowReportsExactlyThatLineAndColumn() {
         StringBuilder csv = new StringBuilder(AcquisitionCsv.HEADER).append('\n');
         for (int line = 2; line <= 30; line++) {

@@ -114,4 +114,32 @@ class UnitsTest {
     void convertersAreCached() {
         assertThat(Units.converter("psi", "Pa")).isSameAs(Units.converter("psi", "Pa"));
     }
+
+    /** Unit texts that crashed requests with a java.lang.Error from the UCUM parser or a stack overflow. */
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"mV\u00e9", "\u20ac", "\ufeffmV", "mV\ufffd",
+            "m\u202eV", "[", "{", "mV{x}", "mV6000", "m[g", "mV)", "V\u0000", "mV/\u00e9"})
+    void refusesMalformedUnitTextWithAMessageNotAnError(String text) {
+        assertThatThrownBy(() -> Units.parse(text)).isInstanceOf(IllegalArgumentException.class)
+                .message().doesNotContain("\u202e").doesNotContain("\u0000");
+    }
+
+    @Test
+    void refusesOverlongUnitText() {
+        assertThatThrownBy(() -> Units.parse("m".repeat(33))).isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("at most 32 characters");
+    }
+
+    @Test
+    void theCacheOfParsedUnitsIsBounded() {
+        // Every row of a hostile file may carry a different valid unit text: the cache must not grow with it.
+        for (int a = 1; a <= 9; a++) {
+            for (int b = 1; b <= 9; b++) {
+                for (int c = 1; c <= 9; c++) {
+                    Units.parse("m" + a + ".s-" + b + ".kg" + c); // 729 different valid units
+                }
+            }
+        }
+        assertThat(Units.cachedEntries()).isLessThanOrEqualTo(2 * Units.CACHE_LIMIT);
+    }
 }
