@@ -182,13 +182,18 @@ public class BenchService {
         } catch (DuplicateKeyException e) {
             // A concurrent submit of the same tokens won, or someone filled one of these points meanwhile.
             List<Reading> saved = new ArrayList<>();
-            for (NewReading in : inputs) {
-                Optional<Reading> existing = byToken(token(in.clientToken()));
+            String who = currentUser();
+            for (int i = 0; i < inputs.size(); i++) {
+                NewReading in = inputs.get(i);
+                String token = in == null ? null : token(in.clientToken());
+                Optional<Reading> existing = byToken(token);
                 if (existing.isEmpty()) {
                     throw new IllegalStateException("A reading for one of these points was recorded by someone else"
                             + " while you were entering it. Reload the unit and correct it if needed; nothing of"
                             + " this submit was saved.");
                 }
+                requireSameReading(existing.get(), lotId, in, token, who, inputs.size() > 1 ? "Reading " + (i + 1) + ": " : "",
+                        planOfLot(lotId));
                 saved.add(existing.get());
             }
             return saved;
@@ -215,12 +220,8 @@ public class BenchService {
                 if (token != null) {
                     Optional<Reading> existing = byToken(token);
                     if (existing.isPresent()) {
-                        Reading r = existing.get();
-                        if (r.lotId() != lotId || !r.serial().equals(in.serial() == null ? "" : in.serial().strip())) {
-                            throw new IllegalArgumentException("the client token " + token
-                                    + " was already used for another reading.");
-                        }
-                        saved.add(r);
+                        requireSameReading(existing.get(), lotId, in, token, who, where, plan);
+                        saved.add(existing.get());
                         continue;
                     }
                 }
@@ -256,6 +257,39 @@ public class BenchService {
         }
         newSlots.forEach((serial, n) -> addProgress(lotId, serial, n));
         return saved;
+    }
+
+    /**
+     * A repeated client token is a repeated submit only when it carries what was saved under it: the same
+     * user, lot, unit, test point and value as entered. Anything else would silently drop the new data, so
+     * it is refused as a conflict (409) naming the token.
+     */
+    private void requireSameReading(Reading saved, long lotId, NewReading in, String token, String who, String where,
+                                    BenchPlan plan) {
+        boolean same = saved.recordedBy().equals(who)
+                && saved.lotId() == lotId
+                && in.serial() != null && saved.serial().equals(in.serial().strip())
+                && in.point() != null && sameSlot(plan, in, saved.slot())
+                && in.value() != null && Double.compare(saved.enteredValue(), in.value()) == 0
+                && (in.unit() == null || in.unit().isBlank() ? saved.enteredUnit().equals(plan.outputUnit())
+                    : saved.enteredUnit().equals(in.unit().strip()))
+                && in.instrument() != null && saved.instrument().equals(in.instrument().strip());
+        if (!same) {
+            throw new IllegalStateException(where + "The client token '" + token + "' was already used for a different"
+                    + " reading; nothing of this submit was saved. Send a new client token for a new reading.");
+        }
+    }
+
+    private BenchPlan planOfLot(long lotId) {
+        return planFor(lot(lotId).orElseThrow(() -> new IllegalArgumentException("There is no lot " + lotId + ".")));
+    }
+
+    private static boolean sameSlot(BenchPlan plan, NewReading in, int slot) {
+        try {
+            return plan.slotOf(in.test(), in.point(), in.direction(), in.cycle()).slot() == slot;
+        } catch (IllegalArgumentException e) {
+            return false;
+        }
     }
 
     /**

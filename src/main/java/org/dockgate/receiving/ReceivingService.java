@@ -16,6 +16,7 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Objects;
 import java.util.Optional;
 import java.util.UUID;
 import org.dockgate.audit.AuditEvent;
@@ -94,6 +95,10 @@ public class ReceivingService {
         }
         List<Long> existing = jdbc.queryForList("select id from receipt where client_token = ?", Long.class, token);
         if (!existing.isEmpty()) {
+            if (!sameReceipt(existing.get(0), draft)) {
+                throw new IllegalStateException("The client token '" + token + "' was already used for a different"
+                        + " receipt; nothing of this one was saved. Send a new client token for a new receipt.");
+            }
             return receipt(existing.get(0)).orElseThrow();
         }
         String po = text(draft.purchaseOrder(), "purchaseOrder", "the purchase-order number");
@@ -166,6 +171,50 @@ public class ReceivingService {
                             FieldChange.of("sampledSerials", null, String.join(", ", sample)))));
         }
         return receipt(receiptId).orElseThrow();
+    }
+
+    /**
+     * Whether a repeated submit carries what the receipt saved under its client token holds: same user,
+     * purchase order, delivery note, date, supplier, and the same lots (model, quantity, serials in order).
+     */
+    private boolean sameReceipt(long receiptId, NewReceipt draft) {
+        Map<String, Object> saved = jdbc.queryForMap("select purchase_order, delivery_note, received_on, received_by,"
+                + " supplier_id from receipt where id = ?", receiptId);
+        if (!Objects.equals(saved.get("received_by"), CurrentActor.username())
+                || !Objects.equals(saved.get("purchase_order"), trimmed(draft.purchaseOrder()))
+                || !Objects.equals(saved.get("delivery_note"), trimmed(draft.deliveryNote()))
+                || draft.receivedOn() == null
+                || !draft.receivedOn().equals(localDate(saved.get("received_on")))
+                || draft.supplierId() == null
+                || draft.supplierId() != ((Number) saved.get("supplier_id")).longValue()) {
+            return false;
+        }
+        List<Map<String, Object>> lots = jdbc.queryForList("select model_id, quantity, serials from receiving_lot"
+                + " where receipt_id = ? order by id", receiptId);
+        if (draft.lots() == null || draft.lots().size() != lots.size()) {
+            return false;
+        }
+        for (int i = 0; i < lots.size(); i++) {
+            NewLot lot = draft.lots().get(i);
+            Map<String, Object> row = lots.get(i);
+            if (lot == null || lot.modelId() == null || lot.quantity() == null || lot.serials() == null
+                    || lot.modelId() != ((Number) row.get("model_id")).longValue()
+                    || lot.quantity() != ((Number) row.get("quantity")).intValue()
+                    || !String.join("\n", lot.serials().stream().map(s -> s == null ? "" : s.trim()).toList())
+                    .equals(row.get("serials"))) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static LocalDate localDate(Object value) {
+        return value instanceof java.sql.Date d ? d.toLocalDate()
+                : value instanceof LocalDate l ? l : LocalDate.parse(String.valueOf(value));
+    }
+
+    private static String trimmed(String value) {
+        return value == null ? null : value.trim();
     }
 
     private record PreparedLot(SensorModelView model, List<String> serials, LotProcedure procedure, SamplingPlan plan) {

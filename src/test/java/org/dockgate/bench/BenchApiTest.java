@@ -63,6 +63,40 @@ class BenchApiTest {
     }
 
     @Test
+    void aClientTokenReusedWithOtherContentOrByAnotherUserIsAConflictNamingTheToken() throws Exception {
+        String token = "reuse-" + lot.id();
+        mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(user("operator").roles("OPERATOR"))
+                        .contentType(MediaType.APPLICATION_JSON).content(json(0, "0.25", token)))
+                .andExpect(status().isCreated()).andExpect(jsonPath("$.value").value(0.25));
+        // Same token, same content: the saved reading again (idempotent repeat).
+        mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(user("operator").roles("OPERATOR"))
+                        .contentType(MediaType.APPLICATION_JSON).content(json(0, "0.25", token)))
+                .andExpect(status().isCreated()).andExpect(jsonPath("$.value").value(0.25));
+        // Same token, another value; another point; another user: each refused, nothing saved.
+        for (String body : new String[] {json(0, "0.75", token), json(1, "0.25", token)}) {
+            mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(user("operator").roles("OPERATOR"))
+                            .contentType(MediaType.APPLICATION_JSON).content(body))
+                    .andExpect(status().isConflict())
+                    .andExpect(content().contentTypeCompatibleWith(PROBLEM))
+                    .andExpect(jsonPath("$.detail").value(containsString("'" + token + "'")));
+        }
+        mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(user("someone-else").roles("OPERATOR"))
+                        .contentType(MediaType.APPLICATION_JSON).content(json(0, "0.25", token)))
+                .andExpect(status().isConflict())
+                .andExpect(content().contentTypeCompatibleWith(PROBLEM))
+                .andExpect(jsonPath("$.detail").value(containsString("'" + token + "'")));
+        // In a batch the position is named too, and the batch saves nothing.
+        mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(user("operator").roles("OPERATOR"))
+                        .contentType(MediaType.APPLICATION_JSON)
+                        .content("[" + json(2, "0.5", "fresh-" + lot.id()) + "," + json(3, "0.5", token) + "]"))
+                .andExpect(status().isConflict())
+                .andExpect(jsonPath("$.detail").value(containsString("Reading 2")))
+                .andExpect(jsonPath("$.detail").value(containsString("'" + token + "'")));
+        assertThat(bench.history(lot.id(), lot.sampledSerials().get(0))).hasSize(1)
+                .allSatisfy(r -> assertThat(r.value()).isEqualTo(0.25));
+    }
+
+    @Test
     void anOperatorPostsOneReadingAndARepeatIsNotStoredTwice() throws Exception {
         String body = json(0, "0.25", "api-" + lot.id() + "-0");
         mvc.perform(post("/api/v1/lots/{id}/readings", lot.id()).with(httpBasic("operator", "operator-demo"))

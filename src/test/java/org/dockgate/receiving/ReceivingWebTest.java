@@ -15,6 +15,7 @@ import org.dockgate.core.sampling.Aql;
 import org.dockgate.receiving.ReceivingTestSupport.Pair;
 import org.dockgate.receiving.ReceivingTestSupport.TestProcedures;
 import org.junit.jupiter.api.Test;
+import java.util.UUID;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
 import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
@@ -67,6 +68,32 @@ class ReceivingWebTest {
                 .param("reason", "x").param("version", "0")).andExpect(status().isForbidden());
         mvc.perform(get("/receiving/new").with(user("operator").roles("OPERATOR")))
                 .andExpect(status().isOk()).andExpect(content().string(containsString("autofocus")));
+    }
+
+    @Test
+    void aReceiptTokenReusedWithAnotherPurchaseOrderOrByAnotherUserIsAConflictNamingTheToken() throws Exception {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        String token = "receipt-" + UUID.randomUUID();
+        String first = body(pair, 2, "[\"R1\",\"R2\"]").replaceFirst("\\}$", ",\"clientToken\":\"" + token + "\"}");
+        String created = mvc.perform(post("/api/v1/receipts").with(user("operator").roles("OPERATOR")).with(csrf())
+                        .contentType(MediaType.APPLICATION_JSON).content(first))
+                .andExpect(status().isCreated()).andReturn().getResponse().getContentAsString();
+        String receiptId = created.replaceAll("(?s)^\\{\"id\":(\\d+).*", "$1");
+        // The same submit again: the receipt already saved.
+        mvc.perform(post("/api/v1/receipts").with(user("operator").roles("OPERATOR")).with(csrf())
+                        .contentType(MediaType.APPLICATION_JSON).content(first))
+                .andExpect(status().isCreated()).andExpect(jsonPath("$.id").value(Long.parseLong(receiptId)));
+        for (String other : new String[] {first.replace("PO-W", "PO-OTHER"), first.replace("\"R2\"", "\"R3\"")}) {
+            mvc.perform(post("/api/v1/receipts").with(user("operator").roles("OPERATOR")).with(csrf())
+                            .contentType(MediaType.APPLICATION_JSON).content(other))
+                    .andExpect(status().isConflict())
+                    .andExpect(content().contentTypeCompatibleWith("application/problem+json"))
+                    .andExpect(jsonPath("$.detail").value(containsString("'" + token + "'")));
+        }
+        mvc.perform(post("/api/v1/receipts").with(user("another-operator").roles("OPERATOR")).with(csrf())
+                        .contentType(MediaType.APPLICATION_JSON).content(first))
+                .andExpect(status().isConflict())
+                .andExpect(jsonPath("$.detail").value(containsString("'" + token + "'")));
     }
 
     @Test

@@ -81,7 +81,8 @@ class BenchApiController {
             description = "Send one reading object, or an array of them (saved together or not at all). The value"
                     + " is converted to the procedure's output unit and kept as entered too. The instrument must be"
                     + " in calibration today; only sampled units of a lot awaiting measurement can be recorded. A"
-                    + " reading whose clientToken was already used is returned as saved, not stored twice. A point"
+                    + " reading whose clientToken was already used with the same content by the same user is returned as"
+                    + " saved, not stored twice; the token with other content or from another user is a 409. A point"
                     + " that already has a reading is refused with 409: correct it instead.",
             requestBody = @RequestBody(content = @Content(mediaType = "application/json", examples = {
                 @ExampleObject(name = "one", value = READING_EXAMPLE),
@@ -94,7 +95,7 @@ class BenchApiController {
                 @ApiResponse(responseCode = "403", description = "Needs OPERATOR or ENGINEER", content = @Content(mediaType = PROBLEM)),
                 @ApiResponse(responseCode = "404", description = "No such lot", content = @Content(mediaType = PROBLEM)),
                 @ApiResponse(responseCode = "409", description = "Instrument out of calibration, lot closed, or the"
-                        + " point was recorded meanwhile", content = @Content(mediaType = PROBLEM))})
+                        + " point was recorded meanwhile, or the clientToken was used for a different reading", content = @Content(mediaType = PROBLEM))})
     ResponseEntity<Object> record(@PathVariable long id, @org.springframework.web.bind.annotation.RequestBody JsonNode body) {
         requireLot(id);
         if (body == null || !(body.isObject() || body.isArray())) {

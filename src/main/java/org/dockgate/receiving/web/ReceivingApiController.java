@@ -50,7 +50,8 @@ class ReceivingApiController {
             description = "Each lot's serials must be unique, non-blank and as many as its quantity; the model needs an"
                     + " approved procedure and the supplier must not be disqualified or discontinued for that model."
                     + " The lot's ISO 2859-1 plan is computed and its sample drawn with a recorded seed. Sending the same"
-                    + " clientToken again returns the receipt already saved.",
+                    + " clientToken again with the same content returns the receipt already saved; the same token with"
+                    + " other content or from another user is refused with 409.",
             requestBody = @io.swagger.v3.oas.annotations.parameters.RequestBody(content = @Content(
                     examples = @ExampleObject(value = """
                     {"purchaseOrder": "PO-4711", "deliveryNote": "DN-0815", "receivedOn": "2026-03-02", "supplierId": 1,
