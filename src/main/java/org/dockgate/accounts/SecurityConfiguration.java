@@ -16,7 +16,9 @@ import org.springframework.security.config.annotation.web.configurers.AuthorizeH
 import org.springframework.security.config.http.SessionCreationPolicy;
 import org.springframework.security.crypto.factory.PasswordEncoderFactories;
 import org.springframework.security.crypto.password.PasswordEncoder;
+import org.springframework.http.HttpMethod;
 import org.springframework.security.web.SecurityFilterChain;
+import org.springframework.security.web.authentication.AnonymousAuthenticationFilter;
 
 /**
  * Two filter chains: HTTP Basic and no session for {@code /api/**} (integrating tools), form login with
@@ -28,7 +30,7 @@ class SecurityConfiguration {
 
     /** Reachable without signing in: the login page, static assets, public certificate verification, API docs. */
     static final String[] PUBLIC = {"/login", "/css/**", "/js/**", "/images/**", "/favicon.ico", "/error",
-        "/verify/**", "/v3/api-docs/**", "/swagger-ui.html", "/swagger-ui/**"};
+        "/verify/**", "/v3/api-docs/**", "/v3/api-docs.yaml", "/swagger-ui.html", "/swagger-ui/**"};
 
     @Bean
     PasswordEncoder passwordEncoder() {
@@ -41,7 +43,8 @@ class SecurityConfiguration {
         http.securityMatcher("/api/**")
                 .authorizeHttpRequests(auth -> {
                     apply(auth, rules);
-                    auth.anyRequest().authenticated();
+                    // Deny by default: a route without a rule in some module's FeatureAccess is refused.
+                    auth.anyRequest().denyAll();
                 })
                 .httpBasic(basic -> basic.realmName("Dockgate")
                         .authenticationEntryPoint((request, response, e) -> unauthorized(response, problems)))
@@ -60,12 +63,16 @@ class SecurityConfiguration {
 
     @Bean
     @Order(2)
-    SecurityFilterChain webChain(HttpSecurity http, AccessRules rules) throws Exception {
+    SecurityFilterChain webChain(HttpSecurity http, AccessRules rules, AccountUserDetailsService userDetails) throws Exception {
+        CurrentAccountFilter accountCheck = new CurrentAccountFilter(userDetails);
         http.authorizeHttpRequests(auth -> {
                     auth.requestMatchers(PUBLIC).permitAll();
                     apply(auth, rules);
-                    auth.anyRequest().authenticated();
+                    auth.anyRequest().denyAll();
                 })
+                // A session keeps the roles it signed in with; this re-reads the account on every request
+                // so a disabled account is signed out and changed roles apply at once.
+                .addFilterBefore(accountCheck, AnonymousAuthenticationFilter.class)
                 .formLogin(form -> form.loginPage("/login").failureUrl("/login?error").defaultSuccessUrl("/", true)
                         .permitAll())
                 .logout(logout -> logout.logoutUrl("/logout").logoutSuccessUrl("/login?logout"))
@@ -82,6 +89,10 @@ class SecurityConfiguration {
                 auth.requestMatchers(rule.pattern()).hasAnyRole(roles);
             } else {
                 auth.requestMatchers(rule.method(), rule.pattern()).hasAnyRole(roles);
+                if (rule.method() == HttpMethod.GET) {
+                    // MVC answers HEAD with the GET handler: HEAD must be exactly as allowed as GET.
+                    auth.requestMatchers(HttpMethod.HEAD, rule.pattern()).hasAnyRole(roles);
+                }
             }
         }
     }

@@ -17,7 +17,10 @@ class AuditAccess {
         return new FeatureAccess("audit",
                 List.of(new NavItem("nav.audit", "nav.audit.description", "/audit", 950,
                         Set.of(Role.AUDITOR, Role.ADMIN))),
-                List.of(AccessRule.any("/audit/**", Role.AUDITOR, Role.ADMIN),
+                List.of(
+                        // Sealing appends to the trail: ADMIN only; AUDITOR reads and checks seals.
+                        AccessRule.writes("/audit/seals", Role.ADMIN),
+                        AccessRule.any("/audit/**", Role.AUDITOR, Role.ADMIN),
                         AccessRule.any("/api/v1/audit/**", Role.AUDITOR, Role.ADMIN)));
     }
 }

@@ -24,6 +24,7 @@ class BenchAccess {
                         AccessRule.writes("/bench/**", WRITERS),
                         AccessRule.writes("/api/v1/lots/*/readings", WRITERS),
                         AccessRule.writes("/api/v1/lots/*/readings:import", WRITERS),
+                        AccessRule.writes("/api/v1/lots/*/import-jobs", WRITERS),
                         AccessRule.reads("/api/v1/lots/*/readings", READERS),
                         AccessRule.writes("/api/v1/readings/**", WRITERS),
                         AccessRule.reads("/api/v1/readings/**", READERS),

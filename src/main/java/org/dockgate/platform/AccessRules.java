@@ -42,7 +42,8 @@ public class AccessRules {
         for (AccessRule rule : rules) {
             PathPattern pattern = PathPatternParser.defaultInstance.parse(rule.pattern());
             if (pattern.matches(container)
-                    && (rule.method() == null || rule.method().matches(method))) {
+                    && (rule.method() == null || rule.method().matches(method)
+                        || rule.method().matches("GET") && "HEAD".equalsIgnoreCase(method))) {
                 return Optional.of(rule);
             }
         }

@@ -55,6 +55,13 @@ import org.springframework.transaction.annotation.Transactional;
 @Service
 public class ReceivingService {
 
+    /**
+     * The serial alphabet: ASCII letters, digits, '-', '_' and '.'. A serial is part of its unit's page
+     * address (/bench/lots/{id}/units/{serial}), and the firewall refuses encoded '/' and ';'; spaces
+     * are refused too, since scanners and links lose or split them.
+     */
+    static final java.util.regex.Pattern SERIAL_ALPHABET = java.util.regex.Pattern.compile("[A-Za-z0-9._-]+");
+
     private static final String LOT_COLUMNS = "id, receipt_id, supplier_id, model_id, quantity, serials,"
             + " specification_revision_id, procedure_revision_id, procedure_label, aql, inspection_level, scheme,"
             + " code_letter, plan_code_letter, sample_size, accept_number, reject_number, severity, full_inspection,"
@@ -246,6 +253,11 @@ public class ReceivingService {
             if (serials.get(i).length() > 64) {
                 throw new ReceivingException("serials", prefix + "The serial on line " + (i + 1)
                         + " is longer than 64 characters.");
+            }
+            if (!serials.get(i).isEmpty() && !SERIAL_ALPHABET.matcher(serials.get(i)).matches()) {
+                throw new ReceivingException("serials", prefix + "The serial \"" + serials.get(i) + "\" on line "
+                        + (i + 1) + " has a character a serial may not hold: use letters A-Z or a-z, digits,"
+                        + " '-', '_' or '.' (no spaces, '/', ';' or other signs).");
             }
         }
         if (!blank.isEmpty()) {

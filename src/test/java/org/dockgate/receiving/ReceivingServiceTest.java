@@ -107,6 +107,21 @@ class ReceivingServiceTest {
         assertThat(count("audit_entry")).isEqualTo(audit);
     }
 
+    @org.junit.jupiter.params.ParameterizedTest
+    @org.junit.jupiter.params.provider.ValueSource(strings = {"AB/12", "AB;12", "AB 12", "AB%2F", "AB?1", "ÄB1"})
+    void serialsOutsideTheAlphabetAreRefusedByName(String bad) {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        assertThatThrownBy(() -> receive(pair, List.of("OK-1", bad)))
+                .isInstanceOf(ReceivingException.class)
+                .hasMessageContaining("\"" + bad + "\" on line 2").hasMessageContaining("letters");
+    }
+
+    @Test
+    void serialsOfLettersDigitsDashUnderscoreAndDotAreAccepted() {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        assertThat(receive(pair, List.of("Ab-1_2.3", "zz.09")).serials()).containsExactly("Ab-1_2.3", "zz.09");
+    }
+
     @Test
     void aModelWithoutApprovedProcedureAndADisqualifiedSupplierAreRefused() {
         Pair none = ReceivingTestSupport.pair(catalogue, procedures, null, SupplierStatus.APPROVED);

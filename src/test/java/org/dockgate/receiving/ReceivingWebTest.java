@@ -49,8 +49,8 @@ class ReceivingWebTest {
     void everyReceivingRoleReadsAndOnlyOperatorsAndEngineersReceive() throws Exception {
         Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
         for (String role : new String[] {"OPERATOR", "ENGINEER", "SUPERVISOR", "AUDITOR"}) {
-            mvc.perform(get("/receiving").with(user("u").roles(role))).andExpect(status().isOk());
-            mvc.perform(get("/api/v1/lots").with(user("u").roles(role))).andExpect(status().isOk());
+            mvc.perform(get("/receiving").with(user(role.toLowerCase()).roles(role))).andExpect(status().isOk());
+            mvc.perform(get("/api/v1/lots").with(user(role.toLowerCase()).roles(role))).andExpect(status().isOk());
         }
         mvc.perform(post("/api/v1/receipts").with(user("auditor").roles("AUDITOR")).with(csrf())
                 .contentType(MediaType.APPLICATION_JSON).content(body(pair, 2, "[\"W1\",\"W2\"]")))

@@ -23,6 +23,7 @@ class PagesRenderTest {
     @Autowired MockMvc mvc;
     @Autowired CatalogueService catalogue;
     @Autowired ProcedureService procedures;
+    @Autowired org.dockgate.accounts.AccountService accounts;
 
     @ParameterizedTest
     @ValueSource(strings = {"/", "/catalogue", "/catalogue/new", "/suppliers", "/procedures", "/admin/users", "/audit",
@@ -37,7 +38,13 @@ class PagesRenderTest {
             case "/PROCEDURE" -> "/procedures/" + procedure.id();
             default -> path;
         };
-        mvc.perform(get(resolved).with(user("admin").roles("ENGINEER", "ADMIN", "AUDITOR", "SUPERVISOR")))
+        // Roles are re-read from the account on every request, so the account must really hold them.
+        if (accounts.byUsername("all-roles").isEmpty()) {
+            accounts.create("all-roles", "All Roles", "all-roles-password", java.util.EnumSet.of(
+                    org.dockgate.platform.Role.ENGINEER, org.dockgate.platform.Role.ADMIN,
+                    org.dockgate.platform.Role.AUDITOR, org.dockgate.platform.Role.SUPERVISOR));
+        }
+        mvc.perform(get(resolved).with(user("all-roles").roles("ENGINEER", "ADMIN", "AUDITOR", "SUPERVISOR")))
                 .andExpect(status().isOk()).andExpect(content().string(containsString("</html>")));
     }
 

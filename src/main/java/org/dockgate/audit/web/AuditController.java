@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.time.LocalDate;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import org.dockgate.platform.CsvCells;
 import org.dockgate.audit.AuditFilter;
 import org.dockgate.audit.AuditReader;
 import org.dockgate.audit.AuditSealer;
@@ -84,7 +85,7 @@ class AuditController {
                 "reason", "previousHash", "entryHash").get())) {
             reader.forEach(filter, e -> {
                 try {
-                    csv.printRecord(e.sequenceNo(), e.occurredAt(), e.actorId(), e.actorName(), e.channel(),
+                    CsvCells.printRecord(csv, e.sequenceNo(), e.occurredAt(), e.actorId(), e.actorName(), e.channel(),
                             e.client(), e.entityType(), e.entityId(), e.action(), e.summary(), e.changes(),
                             e.reason(), e.previousHash(), e.entryHash());
                 } catch (IOException io) {

@@ -74,12 +74,12 @@ class InstrumentsPagesTest {
     @ParameterizedTest(name = "{0} reads the register")
     @ValueSource(strings = {"OPERATOR", "ENGINEER", "SUPERVISOR", "AUDITOR", "ADMIN"})
     void everyRoleReadsTheRegisterWithItsDueDateStatus(String role) throws Exception {
-        mvc.perform(get("/reference-instruments").with(user("someone").roles(role)))
+        mvc.perform(get("/reference-instruments").with(user(role.toLowerCase()).roles(role)))
                 .andExpect(status().isOk())
                 .andExpect(content().string(allOf(containsString("RI-PRS-02"), containsString("Expired since"),
                         containsString("badge-EXPIRED"), containsString("badge-DUE_SOON"),
                         containsString("href=\"/reference-instruments\""))));
-        mvc.perform(get("/reference-instruments/RI-PRS-01").with(user("someone").roles(role)))
+        mvc.perform(get("/reference-instruments/RI-PRS-01").with(user(role.toLowerCase()).roles(role)))
                 .andExpect(status().isOk())
                 .andExpect(content().string(allOf(containsString("NBL-C-24117"), containsString("calibration-history"))));
     }
