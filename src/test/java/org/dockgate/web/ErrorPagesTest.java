@@ -52,9 +52,19 @@ class ErrorPagesTest {
     }
 
     @Test
-    void anUnknownPageIsAFriendly404WithoutAStackTrace() throws Exception {
+    void anUnknownPageIsRefusedByDefaultWithoutAStackTrace() throws Exception {
+        // Deny by default: a path no access rule covers is refused before any handler looks at it, so an
+        // unknown page answers 403, never a page or a stack trace.
         String session = signIn("engineer", "engineer-demo");
         HttpResponse<String> response = page("/no/such/page", session);
+        assertThat(response.statusCode()).isEqualTo(403);
+        assertThat(response.body()).doesNotContain("Exception").doesNotContain("at org.");
+    }
+
+    @Test
+    void anUnknownSensorModelIsAFriendly404WithoutAStackTrace() throws Exception {
+        String session = signIn("engineer", "engineer-demo");
+        HttpResponse<String> response = page("/catalogue/987654321", session);
         assertThat(response.statusCode()).isEqualTo(404);
         assertThat(response.body()).contains("Page not found").doesNotContain("Exception").doesNotContain("at org.");
     }
@@ -77,10 +87,16 @@ class ErrorPagesTest {
         assertThat(forbidden.statusCode()).isEqualTo(403);
         assertThat(forbidden.body()).contains("AUDITOR or ADMIN");
 
+        // Deny by default: a path without an access rule is refused, as a problem document.
         HttpResponse<String> unknown = get("/api/v1/no-such-thing", "operator", "operator-demo", "application/json");
-        assertThat(unknown.statusCode()).isEqualTo(404);
+        assertThat(unknown.statusCode()).isEqualTo(403);
         assertThat(unknown.headers().firstValue("Content-Type").orElse("")).startsWith("application/problem+json");
-        assertThat(unknown.body()).contains("no API resource").doesNotContain("Exception");
+        assertThat(unknown.body()).doesNotContain("Exception");
+
+        HttpResponse<String> unknownLot = get("/api/v1/lots/987654321", "engineer", "engineer-demo", "application/json");
+        assertThat(unknownLot.statusCode()).isEqualTo(404);
+        assertThat(unknownLot.headers().firstValue("Content-Type").orElse("")).startsWith("application/problem+json");
+        assertThat(unknownLot.body()).doesNotContain("Exception");
 
         HttpResponse<String> verify = get("/api/v1/audit/verify", "auditor", "auditor-demo", "application/json");
         assertThat(verify.statusCode()).isEqualTo(200);
