@@ -13,6 +13,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.OptionalDouble;
 import java.util.OptionalInt;
 import java.util.Set;
 import java.util.TreeSet;
@@ -20,6 +21,10 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.dockgate.audit.AuditEvent;
 import org.dockgate.audit.AuditEvent.FieldChange;
 import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.core.acquisition.AmbientConditions;
+import org.dockgate.core.acquisition.ConditionsCsv;
+import org.dockgate.core.acquisition.RowError;
+import org.dockgate.core.procedure.EnvironmentalLimits;
 import org.dockgate.core.procedure.SensorSpecification;
 import org.dockgate.core.quantity.Units;
 import org.dockgate.core.series.Direction;
@@ -337,47 +342,161 @@ public class BenchService {
         }
     }
 
-    /**
-     * Records the environmental conditions of a unit's session (append-only; the latest applies).
-     *
-     * @param lotId    the lot
-     * @param serial   a sampled unit
-     * @param ambientC ambient temperature in °C, −50 to 100
-     * @param rhPct    relative humidity in %, 0 to 100
-     * @return the saved conditions
-     * @throws IllegalArgumentException when a value is missing or out of range, or the unit is not sampled
-     */
+    /** The longest deviation reason kept. */
+    public static final int MAX_DEVIATION_REASON = 2000;
+
+    /** Records conditions within the procedure's limits, without pressure; see {@link #recordConditions(long, String, NewConditions)}. */
     public Conditions recordConditions(long lotId, String serial, Double ambientC, Double rhPct) {
+        return recordConditions(lotId, serial, new NewConditions(ambientC, rhPct, null, null));
+    }
+
+    /**
+     * Records the environmental conditions of a unit's session (append-only; the latest applies). They are
+     * checked against the limits of the lot's procedure revision ({@link EnvironmentalLimits}): outside them
+     * the entry is refused, unless it comes with a deviation reason, which is kept beside the departure and
+     * printed on the certificate. Physically impossible values (not finite, below absolute zero, humidity
+     * outside 0 … 100 %, negative pressure) are always refused.
+     *
+     * @param lotId  the lot, awaiting measurement
+     * @param serial a sampled unit
+     * @param input  the conditions as entered
+     * @return the saved conditions
+     * @throws IllegalArgumentException when a value is missing or impossible, lies outside the limits without a
+     *                                  deviation reason (the message names the value and the limit), a reason is
+     *                                  given for conditions within the limits, or the unit is not sampled
+     * @throws IllegalStateException    when the lot is closed
+     */
+    public Conditions recordConditions(long lotId, String serial, NewConditions input) {
         return tx.execute(status -> {
             BenchLot lot = openLot(lotId);
-            String unit = requireSampled(lot, serial);
-            double t = finite(ambientC, "ambient temperature");
-            double h = finite(rhPct, "relative humidity");
-            if (t < -50 || t > 100) {
-                throw new IllegalArgumentException("An ambient temperature of " + Plain.number(t)
-                        + " °C is not plausible at a bench (−50 to 100 °C).");
-            }
-            if (h < 0 || h > 100) {
-                throw new IllegalArgumentException("Relative humidity is 0 to 100 %, got " + Plain.number(h) + ".");
-            }
-            Instant now = clock.instant();
-            GeneratedKeyHolder keys = new GeneratedKeyHolder();
-            jdbc.update(c -> {
-                PreparedStatement ps = c.prepareStatement("insert into bench_conditions (lot_id, serial, ambient_c,"
-                        + " relative_humidity_percent, recorded_by, recorded_at) values (?, ?, ?, ?, ?, ?)", new String[] {"id"});
-                ps.setLong(1, lotId);
-                ps.setString(2, unit);
-                ps.setDouble(3, t);
-                ps.setDouble(4, h);
-                ps.setString(5, currentUser());
-                ps.setObject(6, OffsetDateTime.ofInstant(now, ZoneOffset.UTC));
-                return ps;
-            }, keys);
-            long id = keys.getKey().longValue();
-            events.publishEvent(AuditEvent.of(LOT, lotId, "CONDITIONS", lot.label() + ", " + unit + ": ambient "
-                    + Plain.number(t) + " °C, RH " + Plain.number(h) + " %"));
-            return conditions(lotId, unit).orElseThrow();
+            CheckedConditions checked = checkConditions(lot, limitsOf(lot), serial, input);
+            return insertConditions(lot, checked);
         });
+    }
+
+    /**
+     * Imports a conditions file (the companion of a data-acquisition CSV, format in {@link ConditionsCsv}):
+     * every row checked as {@link #recordConditions(long, String, NewConditions)} checks one, then all saved in
+     * one transaction, or nothing when any row is wrong.
+     *
+     * @param lotId   the lot, awaiting measurement
+     * @param file    the file's characters (UTF-8); the caller closes it
+     * @param preview check only, save nothing
+     * @return rows read, rows saved, every error by line (and column)
+     * @throws IllegalStateException when the lot is closed
+     */
+    public ConditionsImport importConditions(long lotId, java.io.Reader file, boolean preview) {
+        return tx.execute(status -> {
+            BenchLot lot = openLot(lotId);
+            EnvironmentalLimits limits = limitsOf(lot);
+            ConditionsCsv.Report report = ConditionsCsv.parse(file);
+            List<RowError> errors = new ArrayList<>(report.errors());
+            List<CheckedConditions> checked = new ArrayList<>();
+            for (ConditionsCsv.ConditionsRow row : report.rows()) {
+                AmbientConditions c = row.conditions();
+                try {
+                    checked.add(checkConditions(lot, limits, row.serial(), new NewConditions(c.ambientC(),
+                            c.relativeHumidityPercent(), c.pressureKPa().isPresent() ? c.pressureKPa().getAsDouble() : null,
+                            row.deviationReason().orElse(null))));
+                } catch (IllegalArgumentException e) {
+                    errors.add(new RowError(row.line(), Optional.empty(), e.getMessage()));
+                }
+            }
+            errors.sort(java.util.Comparator.comparingLong(RowError::line));
+            int rows = (int) report.rowsRead();
+            if (preview || !errors.isEmpty()) {
+                return new ConditionsImport(preview, false, rows, checked.size(),
+                        errors.stream().map(RowError::toString).toList());
+            }
+            checked.forEach(c -> insertConditions(lot, c));
+            return new ConditionsImport(false, true, rows, checked.size(), List.of());
+        });
+    }
+
+    /** Conditions checked against physics and the procedure's limits, ready to save. */
+    private record CheckedConditions(String serial, AmbientConditions conditions, String departure, String reason) {
+    }
+
+    private EnvironmentalLimits limitsOf(BenchLot lot) {
+        return procedures.revision(lot.procedureRevisionId()).orElseThrow(
+                () -> new IllegalArgumentException("The lot's procedure revision does not exist."))
+                .content().environmentalLimits();
+    }
+
+    private CheckedConditions checkConditions(BenchLot lot, EnvironmentalLimits limits, String serial,
+                                              NewConditions input) {
+        String unit = requireSampled(lot, serial);
+        if (input == null) {
+            throw new IllegalArgumentException("Send the conditions: 'ambientC' and 'relativeHumidityPercent'.");
+        }
+        if (input.ambientC() == null) {
+            throw new IllegalArgumentException("'ambientC' is missing: the ambient temperature in °C.");
+        }
+        if (input.relativeHumidityPercent() == null) {
+            throw new IllegalArgumentException("'relativeHumidityPercent' is missing: the relative humidity in %.");
+        }
+        AmbientConditions c = new AmbientConditions(input.ambientC(), input.relativeHumidityPercent(),
+                input.pressureKPa() == null ? OptionalDouble.empty() : OptionalDouble.of(input.pressureKPa()));
+        List<String> departures = limits.departures(c);
+        String reason = input.deviationReason() == null || input.deviationReason().isBlank() ? null
+                : input.deviationReason().strip();
+        String departure = departures.isEmpty() ? null : String.join("; ", departures);
+        if (departure != null && reason == null) {
+            throw new IllegalArgumentException(unit + ": " + departure + ". Nothing was saved: bring the bench within"
+                    + " the limits of " + lot.label() + ", or record these conditions as a deviation from the"
+                    + " procedure with its reason ('deviationReason').");
+        }
+        if (departure == null && reason != null) {
+            throw new IllegalArgumentException("'deviationReason': these conditions lie within the procedure's limits ("
+                    + limits.ambientText() + ", " + limits.humidityText() + "), so there is no deviation to record;"
+                    + " leave the reason empty.");
+        }
+        if (reason != null && reason.length() > MAX_DEVIATION_REASON) {
+            throw new IllegalArgumentException("'deviationReason' is " + reason.length() + " characters long, at most "
+                    + MAX_DEVIATION_REASON + " are kept.");
+        }
+        return new CheckedConditions(unit, c, departure, reason);
+    }
+
+    private Conditions insertConditions(BenchLot lot, CheckedConditions checked) {
+        AmbientConditions c = checked.conditions();
+        Instant now = clock.instant();
+        jdbc.update(con -> {
+            PreparedStatement ps = con.prepareStatement("insert into bench_conditions (lot_id, serial, ambient_c,"
+                    + " relative_humidity_percent, pressure_kpa, departure, deviation_reason, recorded_by, recorded_at)"
+                    + " values (?, ?, ?, ?, ?, ?, ?, ?, ?)");
+            ps.setLong(1, lot.id());
+            ps.setString(2, checked.serial());
+            ps.setDouble(3, c.ambientC());
+            ps.setDouble(4, c.relativeHumidityPercent());
+            if (c.pressureKPa().isPresent()) {
+                ps.setDouble(5, c.pressureKPa().getAsDouble());
+            } else {
+                ps.setNull(5, Types.DOUBLE);
+            }
+            ps.setString(6, checked.departure());
+            ps.setString(7, checked.reason());
+            ps.setString(8, currentUser());
+            ps.setObject(9, OffsetDateTime.ofInstant(now, ZoneOffset.UTC));
+            return ps;
+        });
+        String summary = lot.label() + ", " + checked.serial() + ": ambient " + Plain.number(c.ambientC()) + " °C, RH "
+                + Plain.number(c.relativeHumidityPercent()) + " %"
+                + (c.pressureKPa().isPresent() ? ", " + Plain.number(c.pressureKPa().getAsDouble()) + " kPa" : "");
+        events.publishEvent(checked.reason() == null ? AuditEvent.of(LOT, lot.id(), "CONDITIONS", summary)
+                : AuditEvent.withReason(LOT, lot.id(), "CONDITIONS_DEVIATION", summary + " (deviation from the procedure: "
+                        + checked.departure() + ")", checked.reason()));
+        return conditions(lot.id(), checked.serial()).orElseThrow();
+    }
+
+    /**
+     * The sampled units of a lot that have no conditions recorded, in the sample's order (a unit cannot be
+     * dispositioned without them).
+     */
+    public List<String> unitsWithoutConditions(long lotId, List<String> sampledSerials) {
+        Set<String> recorded = new java.util.HashSet<>(jdbc.queryForList(
+                "select distinct serial from bench_conditions where lot_id = ?", String.class, lotId));
+        return sampledSerials.stream().filter(s -> !recorded.contains(s)).toList();
     }
 
     // ---- reading back (evaluation)
@@ -397,10 +516,17 @@ public class BenchService {
 
     /** The latest conditions recorded for a unit, if any. */
     public Optional<Conditions> conditions(long lotId, String serial) {
-        return jdbc.query("select id, lot_id, serial, ambient_c, relative_humidity_percent, recorded_by, recorded_at"
-                        + " from bench_conditions where lot_id = ? and serial = ? order by id desc",
-                (rs, n) -> new Conditions(rs.getLong(1), rs.getLong(2), rs.getString(3), rs.getDouble(4), rs.getDouble(5),
-                        rs.getString(6), rs.getObject(7, OffsetDateTime.class).toInstant()), lotId, serial)
+        return jdbc.query("select id, lot_id, serial, ambient_c, relative_humidity_percent, recorded_by, recorded_at,"
+                        + " pressure_kpa, departure, deviation_reason"
+                        + " from bench_conditions where lot_id = ? and serial = ? order by id desc fetch first 1 rows only",
+                (rs, n) -> {
+                    double p = rs.getDouble(8);
+                    Optional<Double> pressure = rs.wasNull() ? Optional.empty() : Optional.of(p);
+                    return new Conditions(rs.getLong(1), rs.getLong(2), rs.getString(3), rs.getDouble(4),
+                            rs.getDouble(5), pressure, Optional.ofNullable(rs.getString(9)),
+                            Optional.ofNullable(rs.getString(10)), rs.getString(6),
+                            rs.getObject(7, OffsetDateTime.class).toInstant());
+                }, lotId, serial)
                 .stream().findFirst();
     }
 

@@ -6,7 +6,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.OptionalDouble;
+import org.dockgate.core.procedure.EnvironmentalLimits;
 import org.dockgate.core.procedure.Metric;
+import org.dockgate.core.procedure.ProcedureDerivation;
 import org.dockgate.core.procedure.ProcedureProposal;
 import org.dockgate.core.procedure.ProcedureProposal.FrequencySweep;
 import org.dockgate.core.procedure.ProcedureProposal.MetricAcceptance;
@@ -34,6 +36,10 @@ final class ProposalEditor {
         FIELDS.put("sweep.frequencies", "Frequency sweep: frequencies in Hz, comma-separated");
         FIELDS.put("sweep.instrument", "Reference instrument for the frequency sweep (identifier)");
         FIELDS.put("benchMinutes", "Estimated bench time per unit (min)");
+        FIELDS.put("environment.ambientMinC", "Lowest ambient temperature allowed at the bench (°C)");
+        FIELDS.put("environment.ambientMaxC", "Highest ambient temperature allowed at the bench (°C)");
+        FIELDS.put("environment.humidityMinPercent", "Lowest relative humidity allowed at the bench (% RH)");
+        FIELDS.put("environment.humidityMaxPercent", "Highest relative humidity allowed at the bench (% RH)");
         for (Metric m : Metric.values()) {
             FIELDS.put("limit." + m.name() + ".lower", "Acceptance lower limit for " + m.name().toLowerCase().replace('_', ' '));
             FIELDS.put("limit." + m.name() + ".upper", "Acceptance upper limit for " + m.name().toLowerCase().replace('_', ' '));
@@ -57,6 +63,8 @@ final class ProposalEditor {
         FrequencySweep f = p.frequencySweep();
         List<MetricAcceptance> acceptance = new ArrayList<>(p.acceptance());
         int minutes = p.estimatedBenchMinutes();
+        EnvironmentalLimits limits = p.environmentalLimits();
+        boolean limitsEdited = false;
         for (var e : overrides.entrySet()) {
             String key = e.getKey();
             String value = e.getValue().trim();
@@ -115,6 +123,17 @@ final class ProposalEditor {
                             f.reasoning());
                 }
                 case "benchMinutes" -> minutes = whole(value, key, 1, 100_000);
+                case "environment.ambientMinC", "environment.ambientMaxC", "environment.humidityMinPercent",
+                     "environment.humidityMaxPercent" -> {
+                    double v = number(value, key);
+                    limits = new EnvironmentalLimits(
+                            key.endsWith("ambientMinC") ? v : limits.ambientMinC(),
+                            key.endsWith("ambientMaxC") ? v : limits.ambientMaxC(),
+                            key.endsWith("humidityMinPercent") ? v : limits.humidityMinPercent(),
+                            key.endsWith("humidityMaxPercent") ? v : limits.humidityMaxPercent(),
+                            "set by the engineer");
+                    limitsEdited = true;
+                }
                 case "static.instrument", "sweep.instrument" -> {
                     // applied by restricting the candidates before derivation
                 }
@@ -145,7 +164,9 @@ final class ProposalEditor {
                 }
             }
         }
-        return new ProcedureProposal(s, n, f, acceptance, p.sampling(), p.environment(), p.cautions(), minutes, p.reasoning());
+        return new ProcedureProposal(s, n, f, acceptance, p.sampling(),
+                limitsEdited ? ProcedureDerivation.environment(limits) : p.environment(), p.cautions(), minutes,
+                p.reasoning(), limits);
     }
 
     private static void require(boolean condition, String message) {
@@ -176,6 +197,18 @@ final class ProposalEditor {
             return v;
         } catch (NumberFormatException e) {
             throw new IllegalArgumentException("'" + value + "' is not a whole number (" + key + ").");
+        }
+    }
+
+    private static double number(String value, String key) {
+        try {
+            double v = Double.parseDouble(value);
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + value + "' is not a number (" + key + ").");
         }
     }
 

@@ -218,9 +218,8 @@ public final class ProcedureDerivation {
                     SingleSamplingPlans.plan(lotSize, options.aql(), options.level(), Severity.REDUCED)));
         }
 
-        List<String> environment = List.of(
-                "Ambient temperature in °C (the lab keeps 23 ± 5 °C unless the datasheet states its own reference conditions)",
-                "Relative humidity in % (20 … 80 % RH)");
+        EnvironmentalLimits limits = EnvironmentalLimits.defaultFor(spec.kind());
+        List<String> environment = environment(limits);
         List<String> cautions = new ArrayList<>(spec.kind().cautions());
         cautions.add("Acceptance by this inspection does not qualify a part for a safety function. Local codes,"
                 + " licensed practice and the lab's own safety rules govern every test.");
@@ -237,7 +236,20 @@ public final class ProcedureDerivation {
                 + (noise != null ? ", noise capture " + fmt(noise.durationSeconds()) + " s + 1 min" : "")
                 + (sweep != null ? ", " + sweep.frequenciesHz().size() + " sweep points × 20 s" : "") + ".");
         return new ProcedureProposal(statics, noise, sweep, acceptance, sampling, environment, cautions,
-                (int) Math.ceil(seconds / 60.0), reasoning);
+                (int) Math.ceil(seconds / 60.0), reasoning, limits);
+    }
+
+    /**
+     * What the bench records for each unit, with the limits each must lie within.
+     *
+     * @param limits the procedure's environmental limits
+     * @return one line per quantity to record
+     */
+    public static List<String> environment(EnvironmentalLimits limits) {
+        return List.of(
+                "Ambient temperature in °C, within " + limits.ambientText() + " (" + limits.basis() + ")",
+                "Relative humidity in %, within " + limits.humidityText(),
+                "Barometric pressure in kPa where the bench has a barometer (recorded, not judged)");
     }
 
     static StaticCalibration staticCalibration(SensorSpecification spec, List<ReferenceCandidate> candidates) {

@@ -9,13 +9,28 @@ import org.dockgate.core.series.Direction;
  * A proposed inspection procedure: the tests with their parameters, the acceptance limits per metric
  * with guard bands and TURs, the sampling plans, what to record and what to beware of. Every derived
  * value carries the reasoning that produced it, for the engineer who reviews it.
+ *
+ * @param environmentalLimits the ambient temperature and humidity the bench must keep; a procedure stored
+ *                            before limits were part of it reads as {@link EnvironmentalLimits#GENERAL}, the
+ *                            limits its text already stated
  */
 public record ProcedureProposal(StaticCalibration staticCalibration, NoiseCapture noiseCapture,
                                 FrequencySweep frequencySweep, List<MetricAcceptance> acceptance,
                                 List<SamplingRow> sampling, List<String> environment, List<String> cautions,
-                                int estimatedBenchMinutes, List<String> reasoning) {
+                                int estimatedBenchMinutes, List<String> reasoning,
+                                EnvironmentalLimits environmentalLimits) {
+
+    /** A proposal with the lab's general environmental limits. */
+    public ProcedureProposal(StaticCalibration staticCalibration, NoiseCapture noiseCapture,
+                             FrequencySweep frequencySweep, List<MetricAcceptance> acceptance,
+                             List<SamplingRow> sampling, List<String> environment, List<String> cautions,
+                             int estimatedBenchMinutes, List<String> reasoning) {
+        this(staticCalibration, noiseCapture, frequencySweep, acceptance, sampling, environment, cautions,
+                estimatedBenchMinutes, reasoning, EnvironmentalLimits.GENERAL);
+    }
 
     public ProcedureProposal {
+        environmentalLimits = environmentalLimits == null ? EnvironmentalLimits.GENERAL : environmentalLimits;
         acceptance = List.copyOf(acceptance);
         sampling = List.copyOf(sampling);
         environment = List.copyOf(environment);

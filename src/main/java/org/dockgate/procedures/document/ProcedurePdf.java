@@ -488,6 +488,7 @@ public class ProcedurePdf {
             section("7 Conditions to record");
             put("Record these with the readings of every unit:", body, 0, 2);
             bullets(proposal.environment(), body);
+            put("Environmental limits: " + proposal.environmentalLimits().describe(), body, 2, 0);
         }
 
         private void history() throws DocumentException {
