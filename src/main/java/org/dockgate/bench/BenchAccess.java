@@ -26,6 +26,9 @@ class BenchAccess {
                         AccessRule.writes("/api/v1/lots/*/readings:import", WRITERS),
                         AccessRule.writes("/api/v1/lots/*/import-jobs", WRITERS),
                         AccessRule.reads("/api/v1/lots/*/readings", READERS),
+                        AccessRule.writes("/api/v1/lots/*/units/*/conditions", WRITERS),
+                        AccessRule.reads("/api/v1/lots/*/units/*/conditions", READERS),
+                        AccessRule.writes("/api/v1/lots/*/conditions:import", WRITERS),
                         AccessRule.writes("/api/v1/readings/**", WRITERS),
                         AccessRule.reads("/api/v1/readings/**", READERS),
                         AccessRule.reads("/api/v1/import-jobs/**", READERS)));

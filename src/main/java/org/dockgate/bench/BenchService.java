@@ -417,7 +417,8 @@ public class BenchService {
     private record CheckedConditions(String serial, AmbientConditions conditions, String departure, String reason) {
     }
 
-    private EnvironmentalLimits limitsOf(BenchLot lot) {
+    /** The environmental limits of the lot's procedure revision, as the bench checks them. */
+    public EnvironmentalLimits limitsOf(BenchLot lot) {
         return procedures.revision(lot.procedureRevisionId()).orElseThrow(
                 () -> new IllegalArgumentException("The lot's procedure revision does not exist."))
                 .content().environmentalLimits();

@@ -95,6 +95,11 @@ class LotCertificateRenderer {
         doc.section("2 Decision rule");
         doc.paragraph(ev.procedure().settings().ruleInWords() + " Limits are inclusive. The expanded uncertainty U is"
                 + " stated with its coverage factor k for a coverage probability of about 95 % (JCGM 100:2008).");
+        // ISO/IEC 17025:2017 7.8.2.1 n: deviations from the method. Conditions outside the procedure's limits are
+        // the deviations the bench records, each with its reason; "none" is stated too, so silence is not ambiguous.
+        List<String> deviations = ev.units().stream().filter(u -> u.conditionsDeviation().isPresent())
+                .map(u -> "Unit " + u.serial() + ": " + u.conditionsDeviation().get()).toList();
+        doc.facts(Map.of("Deviations from the procedure", deviations.isEmpty() ? "none" : String.join(" · ", deviations)));
 
         doc.section("3 Lot decision");
         boolean accepted = lot.state() == LotState.DISPOSITIONED_ACCEPTED;

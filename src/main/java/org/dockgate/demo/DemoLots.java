@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Random;
 import org.dockgate.bench.BenchService;
 import org.dockgate.bench.ExpectedReading;
+import org.dockgate.bench.NewConditions;
 import org.dockgate.bench.NewReading;
 import org.dockgate.bench.ReadingTest;
 import org.dockgate.catalogue.CatalogueService;
@@ -140,13 +141,21 @@ class DemoLots implements DemoStep {
                 }
             }
             String operator = u % 2 == 0 ? "operator" : "operator2";
-            double ambient = 22.6 + 0.1 * (u % 5);
-            double humidity = 44.0 + (u % 3);
+            // A plausible lab spread, well inside the procedures' 18 … 28 °C and 20 … 75/80 % RH: the air
+            // conditioning holds about ±0.5 °C, humidity wanders a few percent, the barometer with the weather.
+            Random air = new Random(31L * serial.hashCode() + lot.id());
+            double ambient = round1(Math.max(21.6, Math.min(24.4, 23.0 + 0.5 * air.nextGaussian())));
+            double humidity = round1(Math.max(36, Math.min(56, 46 + 4 * air.nextGaussian())));
+            double pressure = round1(100.9 + 0.5 * air.nextGaussian());
             DemoLoader.as(operator, () -> {
-                bench.recordConditions(lot.id(), serial, ambient, humidity);
+                bench.recordConditions(lot.id(), serial, new NewConditions(ambient, humidity, pressure, null));
                 return bench.recordMany(lot.id(), readings);
             });
         }
+    }
+
+    private static double round1(double v) {
+        return Math.round(v * 10) / 10.0;
     }
 
     private String sweepInstrument(LotView lot, String staticInstrument) {

@@ -191,6 +191,13 @@ public class EvaluationService {
                     + evaluation.units().stream().filter(u -> !u.complete()).map(UnitEvaluationView::serial)
                     .collect(Collectors.joining(", ")) + " still need readings.");
         }
+        // Conditions are part of the record (ISO/IEC 17025:2017 7.5.1, from memory, asks for the records to allow repeating
+        // the measurement under conditions as close as possible to the original).
+        List<String> withoutConditions = bench.unitsWithoutConditions(lotId, lot.sampledSerials());
+        if (!withoutConditions.isEmpty()) {
+            throw new IllegalStateException("Lot " + lotId + " cannot be dispositioned: no environmental conditions are"
+                    + " recorded for " + String.join(", ", withoutConditions) + ". Record them at the bench first.");
+        }
         boolean accepted = evaluation.wouldAccept().orElseThrow();
         if (!accepted && actionIfRejected == null) {
             throw new IllegalArgumentException("The lot is rejected: choose what happens to it (return, screening,"
@@ -320,7 +327,8 @@ public class EvaluationService {
                                 .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
                                 .readValue(rs.getString(2));
                         view = new UnitEvaluationView(rs.getString(1), result, 0, split(rs.getString(4)),
-                                split(rs.getString(5)), Optional.empty(), Optional.empty(), List.of(), List.of(), List.of(), true);
+                                split(rs.getString(5)), Optional.empty(), Optional.empty(), List.of(), List.of(), List.of(), true,
+                                Optional.empty());
                     }
                     out.put(rs.getString(1), view.asFrozen());
                 }, lotId);
@@ -386,7 +394,7 @@ public class EvaluationService {
         Set<String> operators = readings.stream().map(Reading::recordedBy).collect(Collectors.toCollection(LinkedHashSet::new));
         return new UnitEvaluationView(serial, result, readings.size(), operators, instrumentsUsed,
                 conditions.map(c -> c.ambientC()), conditions.map(c -> c.relativeHumidityPercent()), statics, sweep,
-                List.copyOf(used.values()), false);
+                List.copyOf(used.values()), false, conditions.flatMap(c -> c.deviationText()));
     }
 
     /**

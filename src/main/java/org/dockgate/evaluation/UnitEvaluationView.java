@@ -15,14 +15,19 @@ import org.dockgate.core.evaluation.UnitResult;
  *                     certificate (an instrument recalibrated between two readings of the unit appears twice)
  * @param frozen       true when this is the result frozen at disposition (the record), false when computed
  *                     now from the stored readings
+ * @param conditionsDeviation when the unit's conditions lay outside the procedure's limits: the departure and
+ *                     the reason it was measured anyway (a deviation from the procedure, stated on the certificate)
  */
 public record UnitEvaluationView(String serial, UnitResult result, int readings, Set<String> operators,
                                  Set<String> instruments, Optional<Double> ambientC, Optional<Double> humidityPercent,
                                  List<StaticPoint> staticPoints, List<SweepPoint> sweepPoints,
-                                 List<CalibrationUsed> calibrations, boolean frozen) {
+                                 List<CalibrationUsed> calibrations, boolean frozen,
+                                 Optional<String> conditionsDeviation) {
 
     public UnitEvaluationView {
         calibrations = calibrations == null ? List.of() : List.copyOf(calibrations);
+        // Results frozen before deviations were recorded have none.
+        conditionsDeviation = conditionsDeviation == null ? Optional.empty() : conditionsDeviation;
     }
 
     /** A static reading, for the calibration-curve chart. */
@@ -44,7 +49,7 @@ public record UnitEvaluationView(String serial, UnitResult result, int readings,
     /** @return the same evaluation marked as the frozen record */
     UnitEvaluationView asFrozen() {
         return new UnitEvaluationView(serial, result, readings, operators, instruments, ambientC, humidityPercent,
-                staticPoints, sweepPoints, calibrations, true);
+                staticPoints, sweepPoints, calibrations, true, conditionsDeviation);
     }
 
     public boolean complete() {

@@ -191,6 +191,72 @@ class BenchApiController {
         return ResponseEntity.status(HttpStatus.CREATED).body(ReadingResponse.of(saved));
     }
 
+    static final String CONDITIONS_EXAMPLE = """
+            {"ambientC": 22.8, "relativeHumidityPercent": 45, "pressureKPa": 101.2}""";
+    static final String DEVIATION_EXAMPLE = """
+            {"ambientC": 29.4, "relativeHumidityPercent": 47,
+             "deviationReason": "Air conditioning out of service; the supplier's lot is needed on the line today"}""";
+
+    @PostMapping(path = "/api/v1/lots/{id}/units/{serial}/conditions", consumes = MediaType.APPLICATION_JSON_VALUE,
+            produces = MediaType.APPLICATION_JSON_VALUE)
+    @Operation(summary = "Record a unit's environmental conditions",
+            description = "ambientC (°C) and relativeHumidityPercent (% RH) are required, pressureKPa is optional."
+                    + " Values outside the limits of the lot's procedure revision are refused (400, the message names"
+                    + " the value and the limit), unless deviationReason says why the unit is measured anyway: then"
+                    + " they are saved as a deviation from the procedure, which the certificate states. Impossible"
+                    + " values (not finite, below −273.15 °C, humidity outside 0 … 100 %, negative pressure) are always"
+                    + " refused. Append-only: the latest record applies, earlier ones stay. A lot cannot be"
+                    + " dispositioned while a sampled unit has no conditions.",
+            requestBody = @RequestBody(content = @Content(mediaType = "application/json", examples = {
+                @ExampleObject(name = "within limits", value = CONDITIONS_EXAMPLE),
+                @ExampleObject(name = "deviation", value = DEVIATION_EXAMPLE)})),
+            responses = {
+                @ApiResponse(responseCode = "201", description = "Saved"),
+                @ApiResponse(responseCode = "400", description = "Missing or impossible value, outside the limits"
+                        + " without a deviation reason, or a unit not in the sample", content = @Content(mediaType = PROBLEM)),
+                @ApiResponse(responseCode = "403", description = "Needs OPERATOR or ENGINEER", content = @Content(mediaType = PROBLEM)),
+                @ApiResponse(responseCode = "404", description = "No such lot", content = @Content(mediaType = PROBLEM)),
+                @ApiResponse(responseCode = "409", description = "The lot is closed", content = @Content(mediaType = PROBLEM))})
+    ResponseEntity<ConditionsResponse> recordConditions(@PathVariable long id, @PathVariable String serial,
+            @org.springframework.web.bind.annotation.RequestBody JsonNode body) {
+        requireLot(id);
+        var saved = bench.recordConditions(id, serial, ConditionsRequest.of(json, body).toNewConditions());
+        return ResponseEntity.status(HttpStatus.CREATED).body(ConditionsResponse.of(saved));
+    }
+
+    @GetMapping(path = "/api/v1/lots/{id}/units/{serial}/conditions", produces = MediaType.APPLICATION_JSON_VALUE)
+    @Operation(summary = "A unit's latest environmental conditions", description = "404 when none are recorded.")
+    ConditionsResponse conditions(@PathVariable long id, @PathVariable String serial) {
+        requireLot(id);
+        return bench.conditions(id, serial).map(ConditionsResponse::of).orElseThrow(
+                () -> new NotFound("No conditions are recorded for " + serial + " of lot " + id + "."));
+    }
+
+    @PostMapping(path = "/api/v1/lots/{id}/conditions:import", consumes = MediaType.MULTIPART_FORM_DATA_VALUE,
+            produces = MediaType.APPLICATION_JSON_VALUE)
+    @Operation(summary = "Import the conditions file that accompanies a data-acquisition CSV",
+            description = "Multipart field 'file': header 'serial,ambientC,relativeHumidityPercent,pressureKPa,"
+                    + "deviationReason', one line per unit. Each row is checked as a single POST of conditions is;"
+                    + " preview=true saves nothing. Otherwise all rows are saved in one transaction, or none when any"
+                    + " row is wrong (400 with every error by line and column).")
+    ResponseEntity<Object> importConditions(@PathVariable long id, @RequestParam("file") MultipartFile file,
+                                            @RequestParam(defaultValue = "false") boolean preview) {
+        requireLot(id);
+        org.dockgate.bench.ConditionsImport outcome;
+        try (var reader = new java.io.InputStreamReader(file.getInputStream(), java.nio.charset.StandardCharsets.UTF_8)) {
+            outcome = bench.importConditions(id, reader, preview);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        if (!preview && !outcome.valid()) {
+            ProblemDetail problem = ProblemDetail.forStatusAndDetail(HttpStatus.BAD_REQUEST, "The conditions file has "
+                    + outcome.errors().size() + " error(s); nothing was saved. First: " + outcome.errors().get(0));
+            problem.setProperty("errors", outcome.errors());
+            return ResponseEntity.badRequest().contentType(MediaType.APPLICATION_PROBLEM_JSON).body(problem);
+        }
+        return ResponseEntity.ok(outcome);
+    }
+
     private void requireLot(long id) {
         if (bench.lot(id).isEmpty()) {
             throw new NotFound("There is no lot " + id + ".");

@@ -11,6 +11,7 @@ import org.dockgate.bench.BenchService;
 import org.dockgate.bench.ExpectedReading;
 import org.dockgate.bench.ImportOutcome;
 import org.dockgate.bench.ImportProgress;
+import org.dockgate.bench.NewConditions;
 import org.dockgate.bench.NewReading;
 import org.dockgate.bench.Reading;
 import org.dockgate.bench.ReadingImport;
@@ -147,6 +148,7 @@ class BenchController {
         model.addAttribute("instruments", instruments);
         model.addAttribute("chosenInstrument", chosen);
         model.addAttribute("conditions", bench.conditions(lotId, serial).orElse(null));
+        model.addAttribute("limits", bench.limitsOf(lot));
         model.addAttribute("history", bench.history(lotId, serial, (long) (shown - 1) * PAGE_SIZE, PAGE_SIZE));
         model.addAttribute("historyCount", historyCount);
         model.addAttribute("historyFrom", historyCount == 0 ? 0 : (long) (shown - 1) * PAGE_SIZE + 1);
@@ -194,11 +196,18 @@ class BenchController {
 
     @PostMapping("/bench/lots/{lotId}/units/{serial}/conditions")
     String conditions(@PathVariable long lotId, @PathVariable String serial, @RequestParam String ambientC,
-                      @RequestParam String relativeHumidityPercent, RedirectAttributes redirect) {
+                      @RequestParam String relativeHumidityPercent,
+                      @RequestParam(required = false) String pressureKPa,
+                      @RequestParam(required = false) String deviationReason, RedirectAttributes redirect) {
         try {
-            bench.recordConditions(lotId, serial, ValueText.number(ambientC, "ambient temperature"),
-                    ValueText.number(relativeHumidityPercent, "relative humidity"));
-            redirect.addFlashAttribute("notice", "Conditions saved.");
+            var saved = bench.recordConditions(lotId, serial, new NewConditions(
+                    ValueText.number(ambientC, "ambient temperature"),
+                    ValueText.number(relativeHumidityPercent, "relative humidity"),
+                    pressureKPa == null || pressureKPa.isBlank() ? null : ValueText.number(pressureKPa, "pressure"),
+                    deviationReason));
+            redirect.addFlashAttribute("notice", saved.deviation()
+                    ? "Conditions saved as a deviation from the procedure: " + saved.departure().orElse("") + "."
+                    : "Conditions saved.");
         } catch (IllegalArgumentException | IllegalStateException e) {
             redirect.addFlashAttribute("problem", e.getMessage());
         }
