@@ -50,11 +50,18 @@ class DemoInstruments implements DemoStep {
                     today.plusDays(Long.parseLong(row.get("dueInDays"))),
                     Double.parseDouble(row.get("coverageFactor")),
                     bands(row.get("segments"), Double.parseDouble(row.get("expandedUncertainty")),
-                            UncertaintyMode.valueOf(row.get("uncertaintyMode")), max));
+                            UncertaintyMode.valueOf(row.get("uncertaintyMode")), max))
+                    .over(optional(row, "calibratedMin"), optional(row, "calibratedMax"), optional(row, "uncertaintyFloor"));
             NewInstrument instrument = new NewInstrument(row.get("identifier"), row.get("description"),
                     row.get("quantity"), Double.parseDouble(row.get("rangeMin")), max, row.get("unit"), calibration);
             DemoLoader.as("admin", () -> instruments.create(instrument));
         }
+    }
+
+    /** An optional number column: absent or empty is null (not stated). */
+    static Double optional(Map<String, String> row, String column) {
+        String text = row.get(column);
+        return text == null || text.isBlank() ? null : Double.valueOf(text.strip());
     }
 
     /** Segments "upTo:U:MODE; …" below the top of the range, then the row's own U up to the range maximum. */

@@ -54,6 +54,15 @@ class InstrumentCalibration {
     @Column(name = "recorded_at", nullable = false, updatable = false)
     private Instant recordedAt;
 
+    @Column(name = "calibrated_min", updatable = false)
+    private Double calibratedMin;
+
+    @Column(name = "calibrated_max", updatable = false)
+    private Double calibratedMax;
+
+    @Column(name = "uncertainty_floor", updatable = false)
+    private Double uncertaintyFloor;
+
     @ElementCollection(fetch = FetchType.EAGER)
     @CollectionTable(name = "instrument_uncertainty_band", joinColumns = @JoinColumn(name = "calibration_id"))
     @OrderColumn(name = "band_no")
@@ -70,6 +79,9 @@ class InstrumentCalibration {
         this.dueOn = calibration.dueOn();
         this.coverageFactor = calibration.coverageFactor();
         this.recordedAt = recordedAt;
+        this.calibratedMin = calibration.calibratedMin();
+        this.calibratedMax = calibration.calibratedMax();
+        this.uncertaintyFloor = calibration.uncertaintyFloor();
         calibration.bands().forEach(b -> bands.add(new Band(b.upTo(), b.expandedUncertainty(), b.mode())));
     }
 
@@ -79,7 +91,8 @@ class InstrumentCalibration {
 
     CalibrationRecord toRecord() {
         return new CalibrationRecord(sequenceNo, certificateNumber, calibratedOn, dueOn, coverageFactor,
-                bands.stream().map(Band::toBand).toList(), recordedAt);
+                bands.stream().map(Band::toBand).toList(), recordedAt,
+                calibratedMin, calibratedMax, uncertaintyFloor);
     }
 
     @Embeddable

@@ -347,7 +347,37 @@ public class InstrumentService {
                     + " zero (commonly 2).");
         }
         checkBands(c.bands(), min, max, unit);
-        return new NewCalibration(certificate, c.calibratedOn(), c.dueOn(), c.coverageFactor(), c.bands());
+        checkCalibratedRange(c, min, max, unit);
+        if (c.uncertaintyFloor() != null && (!Double.isFinite(c.uncertaintyFloor()) || c.uncertaintyFloor() <= 0)) {
+            throw new InstrumentException("uncertaintyFloor", "The smallest U (floor) must be a number greater than"
+                    + " zero in " + unit + ", or left empty; was " + Numbers.plain(c.uncertaintyFloor()) + ".");
+        }
+        return new NewCalibration(certificate, c.calibratedOn(), c.dueOn(), c.coverageFactor(), c.bands(),
+                c.calibratedMin(), c.calibratedMax(), c.uncertaintyFloor());
+    }
+
+    /** The calibrated range, when stated, lies inside the instrument's range and has its ends in order. */
+    private static void checkCalibratedRange(NewCalibration c, double min, double max, String unit) {
+        double slack = 1e-9 * Math.max(max - min, Math.max(Math.abs(min), Math.abs(max)));
+        if (c.calibratedMin() != null && (!Double.isFinite(c.calibratedMin()) || c.calibratedMin() < min - slack
+                || c.calibratedMin() >= max)) {
+            throw new InstrumentException("calibratedMin", "The calibrated range must start inside the instrument's"
+                    + " range (" + range(min, max, unit) + "); " + Numbers.plain(c.calibratedMin()) + " " + unit
+                    + " does not.");
+        }
+        if (c.calibratedMax() != null && (!Double.isFinite(c.calibratedMax()) || c.calibratedMax() > max + slack
+                || c.calibratedMax() <= min)) {
+            throw new InstrumentException("calibratedMax", "The calibrated range must end inside the instrument's"
+                    + " range (" + range(min, max, unit) + "); " + Numbers.plain(c.calibratedMax()) + " " + unit
+                    + " does not.");
+        }
+        double low = c.calibratedMin() == null ? min : c.calibratedMin();
+        double high = c.calibratedMax() == null ? max : c.calibratedMax();
+        if (high <= low) {
+            throw new InstrumentException("calibratedMax", "The upper end of the calibrated range ("
+                    + Numbers.plain(high) + " " + unit + ") must be above its lower end (" + Numbers.plain(low)
+                    + " " + unit + ").");
+        }
     }
 
     private static void checkBands(List<UncertaintyBand> bands, double min, double max, String unit) {
@@ -391,11 +421,27 @@ public class InstrumentService {
                 uncertainty(after, unit)));
         changes.add(FieldChange.of("coverageFactor", before == null ? null : Numbers.plain(before.coverageFactor()),
                 Numbers.plain(after.coverageFactor())));
+        changes.add(FieldChange.of("calibratedRange", before == null ? null : statedRange(before, unit),
+                statedRange(after, unit)));
+        changes.add(FieldChange.of("uncertaintyFloor", before == null ? null : statedFloor(before, unit),
+                statedFloor(after, unit)));
         return changes;
     }
 
     private static String uncertainty(CalibrationRecord c, String unit) {
         return c.bands().stream().map(b -> b.describe(unit)).collect(Collectors.joining("; "));
+    }
+
+    private static String statedRange(CalibrationRecord c, String unit) {
+        if (c.calibratedMin() == null && c.calibratedMax() == null) {
+            return "the instrument's range";
+        }
+        return (c.calibratedMin() == null ? "range minimum" : Numbers.plain(c.calibratedMin())) + " to "
+                + (c.calibratedMax() == null ? "range maximum" : Numbers.plain(c.calibratedMax()) + " " + unit);
+    }
+
+    private static String statedFloor(CalibrationRecord c, String unit) {
+        return c.uncertaintyFloor() == null ? "not stated (derived)" : Numbers.plain(c.uncertaintyFloor()) + " " + unit;
     }
 
     private static String range(double min, double max, String unit) {

@@ -70,9 +70,11 @@ public record InstrumentView(String identifier, String description, String quant
     }
 
     /**
-     * Whether the range [min, max], given in {@code rangeUnit}, lies inside this instrument's range once
-     * converted to its unit ({@link Units#convert}, affine for temperatures). A relative slack of 1e-9 of
-     * the range absorbs the rounding of the conversion (20 bar written as 290.0755 psi still fits 0–20 bar).
+     * Whether the range [min, max], given in {@code rangeUnit}, lies inside the range the current calibration
+     * covers ({@link #calibratedMin}, {@link #calibratedMax}; the instrument's range for a record that states
+     * none) once converted to this instrument's unit ({@link Units#convert}, affine for temperatures). A
+     * relative slack of 1e-9 of the range absorbs the rounding of the conversion (20 bar written as 290.0755 psi
+     * still fits 0–20 bar).
      *
      * @param min       lower end wanted
      * @param max       upper end wanted, ≥ min
@@ -90,20 +92,75 @@ public record InstrumentView(String identifier, String description, String quant
         double low = Units.convert(min, rangeUnit, unit);
         double high = Units.convert(max, rangeUnit, unit);
         double slack = slack();
-        return Math.min(low, high) >= rangeMin - slack && Math.max(low, high) <= rangeMax + slack;
+        return Math.min(low, high) >= calibratedMin(current) - slack && Math.max(low, high) <= calibratedMax(current) + slack;
+    }
+
+    /** @return the lower end of the range a record's certificate covers, in {@code unit}: as stated, else {@code rangeMin} */
+    public double calibratedMin(CalibrationRecord record) {
+        return record.calibratedMin() == null ? rangeMin : record.calibratedMin();
+    }
+
+    /** @return the upper end of the range a record's certificate covers, in {@code unit}: as stated, else {@code rangeMax} */
+    public double calibratedMax(CalibrationRecord record) {
+        return record.calibratedMax() == null ? rangeMax : record.calibratedMax();
+    }
+
+    /**
+     * Whether a value (in {@code valueUnit}) lies inside the range a record's certificate covers.
+     *
+     * @throws IllegalArgumentException when the value is not finite or the unit does not fit
+     */
+    public boolean inCalibratedRange(CalibrationRecord record, double value, String valueUnit) {
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("The value must be a finite number.");
+        }
+        double x = Units.convert(value, valueUnit, unit);
+        double slack = slack();
+        return x >= calibratedMin(record) - slack && x <= calibratedMax(record) + slack;
+    }
+
+    /** @return a record's calibrated range in words, e.g. "0.2 … 20 bar" */
+    public String calibratedRange(CalibrationRecord record) {
+        return Numbers.plain(calibratedMin(record)) + " … " + Numbers.plain(calibratedMax(record)) + " " + unit;
+    }
+
+    /**
+     * The floor of a record's U, in {@code unit}: U(x) = max(floor, band figure at x) everywhere, so no band
+     * gives U = 0 (a percent-of-reading band at zero input). As stated on the record; for a record that states
+     * none (entered before the floor was asked for), derived: the smallest figure its percent-of-reading bands
+     * give at 10 % of full scale, b/100 × 0.1 × full scale ("of reading, not less than of 10 % of the range" is
+     * how such certificates are commonly limited, common practice); 0 when it has no percent-of-reading band
+     * (absolute and full-scale figures are &gt; 0 already).
+     *
+     * @param record one of this instrument's records
+     * @return the floor, ≥ 0, &gt; 0 whenever a band is stated in percent of reading
+     */
+    public double uncertaintyFloor(CalibrationRecord record) {
+        if (record.uncertaintyFloor() != null) {
+            return record.uncertaintyFloor();
+        }
+        return record.bands().stream().filter(b -> b.mode() == UncertaintyMode.PERCENT_OF_READING)
+                .mapToDouble(b -> b.expandedUncertainty() / 100.0 * 0.1 * fullScale()).min().orElse(0.0);
+    }
+
+    /** @return whether a record's floor was derived (the record states none) rather than stated */
+    public boolean uncertaintyFloorDerived(CalibrationRecord record) {
+        return record.uncertaintyFloor() == null;
     }
 
     /**
      * The expanded uncertainty U of the current calibration at a value, in the value's unit: the value is
      * converted to the range unit, its band found (first band whose {@code upTo} ≥ value), U computed
-     * there ({@link UncertaintyBand#expandedUncertaintyAt}) and converted back as a difference (so 0.03 °C
+     * there as max(floor, band figure) ({@link #uncertaintyFloor}, {@link UncertaintyBand#expandedUncertaintyAt})
+     * and converted back as a difference (so 0.03 °C
      * is 0.03 K, not 273.18 K). The coverage factor is {@code current().coverageFactor()}. The instrument's
      * status is not checked here: use {@link InstrumentService#requireSelectable} for that.
      *
      * @param value     the value, finite
      * @param valueUnit its unit, of this instrument's kind
      * @return U in {@code valueUnit}
-     * @throws IllegalArgumentException when the value is not finite, the unit does not fit, or the value lies outside the range
+     * @throws IllegalArgumentException when the value is not finite or the unit does not fit;
+     *                                  {@link OutsideCalibratedRangeException} when it lies outside the calibrated range
      */
     public double expandedUncertaintyAt(double value, String valueUnit) {
         return expandedUncertaintyAt(current, value, valueUnit);
@@ -140,14 +197,15 @@ public record InstrumentView(String identifier, String description, String quant
     public double expandedUncertaintyAt(CalibrationRecord record, double value, String valueUnit) {
         double inRangeUnit = Units.convert(value, valueUnit, unit);
         double slack = slack();
-        if (inRangeUnit < rangeMin - slack || inRangeUnit > rangeMax + slack) {
-            throw new IllegalArgumentException(identifier + " covers " + Numbers.plain(rangeMin) + " to "
-                    + Numbers.plain(rangeMax) + " " + unit + "; " + Numbers.plain(value) + " " + valueUnit.strip()
-                    + " lies outside it.");
+        if (!inCalibratedRange(record, value, valueUnit)) {
+            throw new OutsideCalibratedRangeException(identifier + " is calibrated over " + calibratedRange(record)
+                    + " (certificate " + record.certificateNumber() + "); " + Numbers.plain(value) + " "
+                    + valueUnit.strip() + " lies outside it.");
         }
         UncertaintyBand band = record.bands().stream().filter(b -> inRangeUnit <= b.upTo() + slack).findFirst()
                 .orElse(record.bands().get(record.bands().size() - 1));
-        double u = band.expandedUncertaintyAt(inRangeUnit, fullScale());
+        // U = max(floor, a + b·|x|): the band's figure, never below the record's floor.
+        double u = Math.max(uncertaintyFloor(record), band.expandedUncertaintyAt(inRangeUnit, fullScale()));
         // An uncertainty is a difference: convert it without the offset of affine (temperature) units.
         return Units.convert(u, unit, valueUnit) - Units.convert(0.0, unit, valueUnit);
     }

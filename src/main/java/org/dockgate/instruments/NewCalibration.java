@@ -11,12 +11,29 @@ import java.util.List;
  * @param dueOn             the due date, after {@code calibratedOn}
  * @param coverageFactor    k, finite and &gt; 0
  * @param bands             U by range segment, ascending; the last band ends at the range maximum
+ * @param calibratedMin     lower end of the range the certificate covers, in the instrument's unit; null: the
+ *                          instrument's range minimum
+ * @param calibratedMax     upper end of that range, null: the instrument's range maximum
+ * @param uncertaintyFloor  the smallest U the certificate gives anywhere, in the instrument's unit, &gt; 0; null:
+ *                          not stated, derived (see {@link InstrumentView#uncertaintyFloor})
  */
 public record NewCalibration(String certificateNumber, LocalDate calibratedOn, LocalDate dueOn,
-                             double coverageFactor, List<UncertaintyBand> bands) {
+                             double coverageFactor, List<UncertaintyBand> bands, Double calibratedMin,
+                             Double calibratedMax, Double uncertaintyFloor) {
 
     public NewCalibration {
         bands = bands == null ? List.of() : List.copyOf(bands);
+    }
+
+    /** A calibration over the instrument's whole range with no stated floor. */
+    public NewCalibration(String certificateNumber, LocalDate calibratedOn, LocalDate dueOn, double coverageFactor,
+                          List<UncertaintyBand> bands) {
+        this(certificateNumber, calibratedOn, dueOn, coverageFactor, bands, null, null, null);
+    }
+
+    /** This calibration with a stated calibrated range and floor (any may be null: not stated). */
+    public NewCalibration over(Double min, Double max, Double floor) {
+        return new NewCalibration(certificateNumber, calibratedOn, dueOn, coverageFactor, bands, min, max, floor);
     }
 
     /** A calibration with one uncertainty for the whole range (its band ends at {@code rangeMax}). */

@@ -20,6 +20,15 @@ interface CalibrationInput {
 
     String coverageFactor();
 
+    /** Lower end of the calibrated range; blank: the instrument's range minimum. */
+    String calibratedMin();
+
+    /** Upper end of the calibrated range; blank: the instrument's range maximum. */
+    String calibratedMax();
+
+    /** The smallest U anywhere in the range; blank: derived (see InstrumentView#uncertaintyFloor). */
+    String uncertaintyFloor();
+
     String band1UpTo();
 
     String band1U();

@@ -101,7 +101,20 @@ final class FormValues {
                 || rangeMax == null || bands.contains(null)) {
             return null;
         }
-        return new NewCalibration(input.certificateNumber(), calibratedOn, dueOn, k, bands);
+        Double calibratedMin = optionalNumber(input.calibratedMin(), "calibratedMin");
+        Double calibratedMax = optionalNumber(input.calibratedMax(), "calibratedMax");
+        Double floor = optionalNumber(input.uncertaintyFloor(), "uncertaintyFloor");
+        if (binding.hasFieldErrors("calibratedMin") || binding.hasFieldErrors("calibratedMax")
+                || binding.hasFieldErrors("uncertaintyFloor")) {
+            return null;
+        }
+        return new NewCalibration(input.certificateNumber(), calibratedOn, dueOn, k, bands, calibratedMin,
+                calibratedMax, floor);
+    }
+
+    /** A number that may be left blank (null then); a typed value that is not a number gets a field error. */
+    private Double optionalNumber(String text, String field) {
+        return blank(text) ? null : number(text, field);
     }
 
     private UncertaintyBand band(double upTo, double u, UncertaintyMode mode, String uField) {

@@ -6,10 +6,11 @@ record InstrumentForm(String identifier, String description, String quantity, St
                       String expandedUncertainty, String uncertaintyMode, String coverageFactor,
                       String band1UpTo, String band1U, String band1Mode,
                       String band2UpTo, String band2U, String band2Mode,
-                      String band3UpTo, String band3U, String band3Mode) implements CalibrationInput {
+                      String band3UpTo, String band3U, String band3Mode,
+                      String calibratedMin, String calibratedMax, String uncertaintyFloor) implements CalibrationInput {
 
     static InstrumentForm empty() {
         return new InstrumentForm("", "", "", "", "", "", "", "", "", "", "PERCENT_OF_READING", "2",
-                "", "", "PERCENT_OF_READING", "", "", "PERCENT_OF_READING", "", "", "PERCENT_OF_READING");
+                "", "", "PERCENT_OF_READING", "", "", "PERCENT_OF_READING", "", "", "PERCENT_OF_READING", "", "", "");
     }
 }

@@ -49,7 +49,8 @@ class InstrumentsApiController {
             {"identifier": "RI-PRS-03", "description": "Pressure controller 0 to 10 bar", "quantity": "pressure",
              "rangeMin": 0, "rangeMax": 10, "unit": "bar", "certificateNumber": "NBL-C-24190",
              "calibratedOn": "2026-11-20", "dueOn": "2027-11-20", "coverageFactor": 2,
-             "expandedUncertainty": 0.015, "uncertaintyMode": "PERCENT_OF_READING"}""";
+             "expandedUncertainty": 0.015, "uncertaintyMode": "PERCENT_OF_READING",
+             "calibratedMin": 0, "calibratedMax": 10, "uncertaintyFloor": 0.0002}""";
     private static final String BANDS_EXAMPLE = """
             {"identifier": "RI-RES-02", "description": "Resistance standard set", "quantity": "resistance",
              "rangeMin": 0, "rangeMax": 1000, "unit": "ohm", "certificateNumber": "NBL-C-24191",
@@ -59,7 +60,8 @@ class InstrumentsApiController {
     private static final String CALIBRATION_EXAMPLE = """
             {"version": 0, "certificateNumber": "NBL-C-25001", "calibratedOn": "2026-11-30",
              "dueOn": "2027-11-30", "coverageFactor": 2, "expandedUncertainty": 0.01,
-             "uncertaintyMode": "PERCENT_OF_READING"}""";
+             "uncertaintyMode": "PERCENT_OF_READING", "calibratedMin": 0.2, "calibratedMax": 10,
+             "uncertaintyFloor": 0.0001}""";
     private static final String INSTRUMENT_EXAMPLE = """
             {"identifier": "RI-PRS-02", "description": "Hand-held pressure calibrator 0 to 30 bar",
              "quantity": "pressure", "rangeMin": 0, "rangeMax": 30, "unit": "bar", "status": "EXPIRED",
@@ -68,7 +70,8 @@ class InstrumentsApiController {
              "current": {"sequenceNo": 1, "certificateNumber": "NBL-C-23019", "calibratedOn": "2025-11-17",
                          "dueOn": "2026-11-17", "coverageFactor": 2,
                          "bands": [{"upTo": 30, "expandedUncertainty": 0.05, "mode": "PERCENT_OF_FULL_SCALE"}],
-                         "recordedAt": "2026-12-02T08:00:00Z"},
+                         "recordedAt": "2026-12-02T08:00:00Z", "calibratedMin": 0, "calibratedMax": 30,
+                         "uncertaintyFloor": 0.015, "uncertaintyFloorDerived": false},
              "calibrations": []}""";
     private static final String PROBLEM_EXAMPLE = """
             {"type": "about:blank", "title": "Bad Request", "status": 400,
@@ -108,6 +111,14 @@ class InstrumentsApiController {
             @Schema(description = "Coverage factor k", example = "2") Double coverageFactor,
             @Schema(example = "0.015") Double expandedUncertainty,
             @Schema(example = "PERCENT_OF_READING") UncertaintyMode uncertaintyMode,
+            @Schema(description = "Lower end of the range the certificate covers, in the range unit; omitted: rangeMin."
+                    + " The instrument is not used for a test point outside its calibrated range.", example = "0.2")
+            Double calibratedMin,
+            @Schema(description = "Upper end of the calibrated range; omitted: rangeMax", example = "10")
+            Double calibratedMax,
+            @Schema(description = "The smallest U anywhere in the range, in the range unit, > 0: U(x) = max(floor,"
+                    + " band figure). Omitted: derived, the percent-of-reading figure at 10 % of full scale",
+                    example = "0.0002") Double uncertaintyFloor,
             List<BandDto> bands) {
     }
 
@@ -122,17 +133,34 @@ class InstrumentsApiController {
             @Schema(example = "2") Double coverageFactor,
             @Schema(example = "0.01") Double expandedUncertainty,
             @Schema(example = "PERCENT_OF_READING") UncertaintyMode uncertaintyMode,
+            @Schema(description = "Lower end of the range the certificate covers, in the range unit; omitted: rangeMin."
+                    + " The instrument is not used for a test point outside its calibrated range.", example = "0.2")
+            Double calibratedMin,
+            @Schema(description = "Upper end of the calibrated range; omitted: rangeMax", example = "10")
+            Double calibratedMax,
+            @Schema(description = "The smallest U anywhere in the range, in the range unit, > 0: U(x) = max(floor,"
+                    + " band figure). Omitted: derived, the percent-of-reading figure at 10 % of full scale",
+                    example = "0.0002") Double uncertaintyFloor,
             List<BandDto> bands) {
     }
 
     record CalibrationResponse(int sequenceNo, String certificateNumber, LocalDate calibratedOn, LocalDate dueOn,
-                               Double coverageFactor, List<BandDto> bands, Instant recordedAt) {
-        static CalibrationResponse of(CalibrationRecord c) {
+                               Double coverageFactor, List<BandDto> bands, Instant recordedAt,
+                               @Schema(description = "Lower end of the calibrated range (as stated, or rangeMin)")
+                               Double calibratedMin,
+                               @Schema(description = "Upper end of the calibrated range (as stated, or rangeMax)")
+                               Double calibratedMax,
+                               @Schema(description = "The floor of U in the range unit: U(x) = max(floor, band figure)")
+                               Double uncertaintyFloor,
+                               @Schema(description = "true when the record states no floor and it was derived")
+                               boolean uncertaintyFloorDerived) {
+        static CalibrationResponse of(InstrumentView v, CalibrationRecord c) {
             return new CalibrationResponse(c.sequenceNo(), c.certificateNumber(), c.calibratedOn(), c.dueOn(),
                     ApiNumbers.finiteOrNull(c.coverageFactor()),
                     c.bands().stream().map(b -> new BandDto(ApiNumbers.finiteOrNull(b.upTo()),
                             ApiNumbers.finiteOrNull(b.expandedUncertainty()), b.mode())).toList(),
-                    c.recordedAt());
+                    c.recordedAt(), ApiNumbers.finiteOrNull(v.calibratedMin(c)), ApiNumbers.finiteOrNull(v.calibratedMax(c)),
+                    ApiNumbers.finiteOrNull(v.uncertaintyFloor(c)), v.uncertaintyFloorDerived(c));
         }
     }
 
@@ -149,8 +177,8 @@ class InstrumentsApiController {
             return new InstrumentResponse(v.identifier(), v.description(), v.quantity(),
                     ApiNumbers.finiteOrNull(v.rangeMin()), ApiNumbers.finiteOrNull(v.rangeMax()), v.unit(),
                     v.status(), v.dueSoon(), v.daysUntilDue(), v.expiredSince().orElse(null), v.selectable(),
-                    v.asOf(), v.version(), CalibrationResponse.of(v.current()),
-                    v.calibrations().stream().map(CalibrationResponse::of).toList());
+                    v.asOf(), v.version(), CalibrationResponse.of(v, v.current()),
+                    v.calibrations().stream().map(c -> CalibrationResponse.of(v, c)).toList());
         }
     }
 
@@ -195,7 +223,7 @@ class InstrumentsApiController {
         double min = ApiNumbers.requireFinite(request.rangeMin(), "rangeMin");
         NewCalibration calibration = calibration(request.certificateNumber(), request.calibratedOn(),
                 request.dueOn(), request.coverageFactor(), request.expandedUncertainty(), request.uncertaintyMode(),
-                request.bands(), max);
+                request.bands(), max).over(request.calibratedMin(), request.calibratedMax(), request.uncertaintyFloor());
         InstrumentView created = instruments.create(new NewInstrument(request.identifier(), request.description(),
                 request.quantity(), min, max, request.unit(), calibration));
         return ResponseEntity.created(URI.create("/api/v1/reference-instruments/" + created.identifier()))
@@ -222,7 +250,8 @@ class InstrumentsApiController {
         }
         NewCalibration calibration = calibration(request.certificateNumber(), request.calibratedOn(),
                 request.dueOn(), request.coverageFactor(), request.expandedUncertainty(), request.uncertaintyMode(),
-                request.bands(), view.rangeMax());
+                request.bands(), view.rangeMax())
+                .over(request.calibratedMin(), request.calibratedMax(), request.uncertaintyFloor());
         InstrumentView saved = instruments.recordCalibration(view.identifier(), calibration, request.version());
         return ResponseEntity.status(HttpStatus.CREATED)
                 .location(URI.create("/api/v1/reference-instruments/" + saved.identifier()))
