@@ -22,6 +22,8 @@ import org.springframework.stereotype.Component;
 @Component
 public class CertificatePdfWriter {
 
+    private static final org.slf4j.Logger LOG = org.slf4j.LoggerFactory.getLogger(CertificatePdfWriter.class);
+
     /** The caution every certificate carries (issue 6; common practice for incoming-inspection reports). */
     public static final String SAFETY_CAUTION = "Acceptance by incoming inspection does not by itself qualify a part"
             + " for a safety function; local codes and licensed practice govern.";
@@ -36,17 +38,57 @@ public class CertificatePdfWriter {
     private final String labAddress;
     private final String publicBaseUrl;
     private final ZoneId labZone;
+    private final String receivingOrganisation;
 
     CertificatePdfWriter(PdfFonts fonts, @Value("${dockgate.lab.name:Dockgate laboratory}") String labName,
                          @Value("${dockgate.lab.address:}") String labAddress,
                          @Value("${dockgate.public-base-url:http://localhost:8080}") String publicBaseUrl,
-                         @Value("${dockgate.lab.time-zone:UTC}") String labZone) {
+                         @Value("${dockgate.lab.time-zone:UTC}") String labZone,
+                         @Value("${dockgate.lab.receiving-organisation:}") String receivingOrganisation) {
         this.fonts = fonts;
         this.labName = labName;
         this.labAddress = labAddress;
         this.publicBaseUrl = publicBaseUrl.endsWith("/") ? publicBaseUrl.substring(0, publicBaseUrl.length() - 1)
                 : publicBaseUrl;
         this.labZone = ZoneId.of(labZone);
+        this.receivingOrganisation = receivingOrganisation == null || receivingOrganisation.isBlank()
+                ? "the receiving organisation of " + labName : receivingOrganisation.strip();
+        if (pointsToLocalhost()) {
+            LOG.warn("dockgate.public-base-url is {}: the QR codes and verification links printed on certificates"
+                    + " will point to this computer only. Set it to the address people reach Dockgate at.", this.publicBaseUrl);
+        }
+    }
+
+    /**
+     * Whether the verification links would point to this computer only (localhost, 127.x, ::1), so a
+     * customer scanning the QR code reaches nothing: warned at start-up and marked on the signing page.
+     */
+    public boolean pointsToLocalhost() {
+        String host;
+        try {
+            host = java.net.URI.create(publicBaseUrl).getHost();
+        } catch (IllegalArgumentException e) {
+            return false;
+        }
+        if (host == null) {
+            return false;
+        }
+        String h = host.toLowerCase(java.util.Locale.ROOT);
+        return h.equals("localhost") || h.endsWith(".localhost") || h.startsWith("127.") || h.equals("[::1]")
+                || h.equals("::1") || h.equals("0.0.0.0");
+    }
+
+    /** {@code dockgate.public-base-url} without a trailing slash. */
+    public String publicBaseUrl() {
+        return publicBaseUrl;
+    }
+
+    /**
+     * Who the work is done for (ISO/IEC 17025:2017 7.8.2.1 e): for incoming inspection the receiving
+     * organisation or department, {@code dockgate.lab.receiving-organisation}.
+     */
+    public String receivingOrganisation() {
+        return receivingOrganisation;
     }
 
     /**

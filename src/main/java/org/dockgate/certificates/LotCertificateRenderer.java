@@ -9,13 +9,12 @@ import com.lowagie.text.pdf.PdfTemplate;
 import java.awt.Graphics2D;
 import java.awt.geom.Rectangle2D;
 import java.time.ZoneId;
-import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.stream.Collectors;
 import org.dockgate.accounts.AccountService;
@@ -23,26 +22,33 @@ import org.dockgate.accounts.Person;
 import org.dockgate.bench.BenchService;
 import org.dockgate.bench.Reading;
 import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.bench.ReadingTest;
+import org.dockgate.core.decision.Verdict;
 import org.dockgate.core.evaluation.MetricResult;
+import org.dockgate.core.report.MetricWording;
+import org.dockgate.core.report.ResultFormat;
+import org.dockgate.evaluation.DispositionAction;
+import org.dockgate.evaluation.EvaluationService;
 import org.dockgate.evaluation.Charts;
 import org.dockgate.evaluation.LotEvaluationView;
 import org.dockgate.evaluation.UnitEvaluationView;
 import org.dockgate.instruments.InstrumentService;
 import org.dockgate.receiving.LotState;
+import org.dockgate.receiving.LotView;
 import org.dockgate.receiving.ReceivingService;
 import org.jfree.chart.JFreeChart;
 import org.springframework.stereotype.Component;
 
 /**
- * The certificate of conformance for a lot with an inspection report per sampled unit (the items
+ * The lot's document by outcome — a certificate of conformance (accepted), a certificate of release under
+ * concession (rejected, released as is under an approved concession) or an inspection report stating the
+ * nonconformity (rejected) — with the results per sampled unit (the items
  * ISO/IEC 17025:2017 7.8.2 and 7.8.6 ask of a report, as far as they fit incoming inspection). Every
  * number comes from the stored readings through the evaluation, the procedure revision and the
  * instrument register; charts are drawn as vector graphics.
  */
 @Component
 class LotCertificateRenderer {
-
-    private static final DateTimeFormatter WHEN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm zzz", Locale.ENGLISH);
 
     private final CertificatePdfWriter writer;
     private final ReceivingService receiving;
@@ -64,6 +70,33 @@ class LotCertificateRenderer {
         this.accounts = accounts;
     }
 
+    /** What the document is, from the lot's outcome (issue 12: a rejected lot never gets a "certificate of conformance"). */
+    enum Outcome {
+        ACCEPTED("Certificate of conformance"),
+        CONCESSION("Certificate of release under concession"),
+        REJECTED("Inspection report");
+
+        final String title;
+
+        Outcome(String title) {
+            this.title = title;
+        }
+
+        static Outcome of(LotEvaluationView ev) {
+            if (ev.lot().state() == LotState.DISPOSITIONED_ACCEPTED) {
+                return ACCEPTED;
+            }
+            boolean concession = ev.nonconformance().map(n -> n.action() == DispositionAction.USE_AS_IS_CONCESSION
+                    && n.concessionApprovedBy().isPresent()).orElse(false);
+            return concession ? CONCESSION : REJECTED;
+        }
+    }
+
+    /** The document's title for the lot's outcome, also used by the lot pages. */
+    static String title(LotEvaluationView ev) {
+        return Outcome.of(ev).title;
+    }
+
     byte[] render(CertificateHeading heading, LotEvaluationView ev, String approver) {
         var lot = ev.lot();
         var receipt = receiving.receipt(lot.receiptId()).orElseThrow();
@@ -71,10 +104,16 @@ class LotCertificateRenderer {
         var model = catalogue.model(lot.modelId()).orElseThrow();
         var supplier = catalogue.supplier(lot.supplierId()).orElseThrow();
         ZoneId zone = writer.labZone();
-        CertificateDocument doc = writer.open(heading, "Certificate of conformance");
+        Outcome outcome = Outcome.of(ev);
+        CertificateDocument doc = writer.open(heading, outcome.title);
+        Map<String, List<Reading>> readings = new LinkedHashMap<>();
+        ev.units().forEach(u -> readings.put(u.serial(), bench.currentReadings(lot.id(), u.serial())));
 
         doc.section("1 Identification");
         Map<String, String> id = new LinkedHashMap<>();
+        // ISO/IEC 17025:2017 7.8.2.1 c) where the tests were performed, e) who the work was done for.
+        id.put("Tests performed at", writer.labName() + (writer.labAddress().isBlank() ? "" : ", " + writer.labAddress()));
+        id.put("Performed for", writer.receivingOrganisation());
         id.put("Supplier", supplier.name() + " (" + supplier.code() + ")");
         id.put("Purchase order", receipt.purchaseOrder());
         id.put("Delivery note", receipt.deliveryNote());
@@ -89,33 +128,22 @@ class LotCertificateRenderer {
                 + (plan.planCodeLetter() != plan.codeLetter() ? " (plan of " + plan.planCodeLetter() + ")" : "")
                 + ", n = " + plan.sampleSize() + ", Ac = " + plan.acceptNumber() + ", Re = " + plan.rejectNumber()
                 + (plan.fullInspection() ? ", 100 % inspection" : ""));
+        id.put("Sample drawn", plan.fullInspection() ? "every unit of the lot (seed " + lot.sampleSeed() + ")"
+                : plan.sampleSize() + " of " + lot.quantity() + " units by a seeded random draw, seed " + lot.sampleSeed()
+                + " (Fisher–Yates shuffle of the serials in entry order with java.util.Random; the seed re-draws the same sample)");
         id.put("Units tested", String.join(", ", lot.sampledSerials()));
+        id.put("Serials in the lot", serialList(lot));
         doc.facts(id);
+        doc.paragraph(scopeStatement(lot));
 
         doc.section("2 Decision rule");
         doc.paragraph(ev.procedure().settings().ruleInWords() + " Limits are inclusive. The expanded uncertainty U is"
-                + " stated with its coverage factor k for a coverage probability of about 95 % (JCGM 100:2008).");
-        // ISO/IEC 17025:2017 7.8.2.1 n: deviations from the method. Conditions outside the procedure's limits are
-        // the deviations the bench records, each with its reason; "none" is stated too, so silence is not ambiguous.
-        List<String> deviations = ev.units().stream().filter(u -> u.conditionsDeviation().isPresent())
-                .map(u -> "Unit " + u.serial() + ": " + u.conditionsDeviation().get()).toList();
-        doc.facts(Map.of("Deviations from the procedure", deviations.isEmpty() ? "none" : String.join(" · ", deviations)));
+                + " stated with its coverage factor k for a coverage probability of about 95 % (JCGM 100:2008) and"
+                + " rounded up to two significant digits, the result to the same decimal place (JCGM 100:2008 7.2.6);"
+                + " verdicts are decided on the unrounded values.");
 
         doc.section("3 Lot decision");
-        boolean accepted = lot.state() == LotState.DISPOSITIONED_ACCEPTED;
-        Map<String, String> decision = new LinkedHashMap<>();
-        decision.put("Nonconforming units", ev.nonconforming() + " of " + plan.sampleSize());
-        decision.put("Decision", accepted ? "ACCEPTED (d ≤ Ac)" : "REJECTED (d ≥ Re)");
-        ev.nonconformance().ifPresent(n -> {
-            decision.put("Nonconformance report", n.number());
-            decision.put("Disposition", n.action().name().replace('_', ' ').toLowerCase(Locale.ROOT)
-                    + n.concessionApprovedBy().map(s -> ", concession approved by " + name(s) + ": " + n.concessionReason().orElse(""))
-                    .orElse(""));
-            if (n.correctiveActionRequested()) {
-                decision.put("Corrective action", "requested from the supplier, due " + n.correctiveActionDue().map(Object::toString).orElse("—"));
-            }
-        });
-        doc.facts(decision);
+        doc.facts(decision(ev, outcome, spec.specification().inputUnit(), zone));
 
         doc.section("4 Reference instruments");
         // The calibration records the frozen results were computed with (in force when the readings were taken),
@@ -149,22 +177,22 @@ class LotCertificateRenderer {
 
         doc.section("5 Results per unit");
         for (UnitEvaluationView unit : ev.units()) {
-            List<Reading> readings = bench.currentReadings(lot.id(), unit.serial());
+            List<Reading> unitReadings = readings.get(unit.serial());
             String tested = unit.operators().stream().map(this::name).collect(Collectors.joining(", "));
-            String dates = readings.stream().map(r -> r.recordedAt().atZone(zone).toLocalDate().toString()).distinct()
+            String dates = unitReadings.stream().map(r -> r.recordedAt().atZone(zone).toLocalDate().toString()).distinct()
                     .sorted().collect(Collectors.joining(", "));
             doc.paragraph("Unit " + unit.serial() + ": " + unit.result().unitVerdict().map(Enum::name).orElse("not evaluated")
                     + ". Tested by " + tested + " on " + dates + "; conditions "
                     + unit.ambientC().map(t -> String.format(Locale.ROOT, "%.1f °C", t)).orElse("not recorded")
                     + unit.humidityPercent().map(h -> String.format(Locale.ROOT, ", %.0f %% RH", h)).orElse("") + ".");
-            PdfPTable results = table(doc, new float[] {1.5f, 1.4f, 1.4f, 1.8f, 1.8f, 1.3f}, "Metric", "Measured", "U (k)",
+            PdfPTable results = table(doc, new float[] {1.7f, 1.3f, 1.5f, 1.6f, 1.9f, 1.2f}, "Metric", "Measured", "U (k)",
                     "Tolerance", "Acceptance limits", "Verdict");
             for (MetricResult m : unit.result().metrics()) {
-                cell(doc, results, m.metric().name().toLowerCase(Locale.ROOT).replace('_', ' '));
-                cell(doc, results, measured(m.measured(), m.uncertainty().value()) + " " + m.unit());
-                cell(doc, results, uncertainty(m.uncertainty().value()) + " (" + String.format(Locale.ROOT, "%.2f", m.uncertainty().coverageFactor()) + ")");
-                cell(doc, results, range(m.tolerance().lower(), m.tolerance().upper()));
-                cell(doc, results, range(m.acceptanceLower(), m.acceptanceUpper()));
+                cell(doc, results, MetricWording.name(m, spec.specification()));
+                cell(doc, results, MetricWording.measured(m));
+                cell(doc, results, MetricWording.uncertainty(m));
+                cell(doc, results, MetricWording.tolerance(m));
+                cell(doc, results, MetricWording.acceptance(m));
                 cell(doc, results, m.verdict().name());
             }
             doc.add(results);
@@ -176,10 +204,18 @@ class LotCertificateRenderer {
             }
         }
 
-        doc.section("6 Approval");
+        doc.section("6 Deviations from the procedure");
+        List<String> deviations = deviations(ev, readings);
+        if (deviations.isEmpty()) {
+            doc.paragraph("None recorded.");
+        } else {
+            deviations.forEach(d -> doc.paragraph("• " + d));
+        }
+
+        doc.section("7 Approval");
         Map<String, String> approval = new LinkedHashMap<>();
         approval.put("Approved by", name(approver) + " (digitally signed below)");
-        approval.put("Issued", clock.instant().atZone(zone).format(WHEN));
+        approval.put("Issued", ResultFormat.dateTime(clock.instant(), zone));
         doc.facts(approval);
         return doc.finish();
     }
@@ -220,34 +256,108 @@ class LotCertificateRenderer {
         return accounts.byUsername(username).map(Person::displayName).orElse(username);
     }
 
-    static String number(double v) {
-        if (!Double.isFinite(v)) {
-            return "—";
-        }
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(5)).stripTrailingZeros().toPlainString();
+    // ---------------------------------------------------------------- wording
+
+    /** Every serial of the lot in entry order, the sampled ones marked, so the register finds any of them. */
+    static String serialList(LotView lot) {
+        return lot.serials().stream().map(serial -> lot.sampled(serial) ? serial + " (sampled)" : serial)
+                .collect(Collectors.joining(", "));
     }
 
     /**
-     * U with two significant digits, and the measured value rounded to the same decimal place
-     * (JCGM 100:2008 7.2.6), so floating-point noise far below U prints as 0.
+     * ISO/IEC 17025:2017 7.8.2.1 l) the results relate only to the items tested; and how a sampling
+     * decision applies to the rest of the lot (ISO 2859-1: acceptance sampling judges the lot, not each unit).
      */
-    static String uncertainty(double u) {
-        if (!(u > 0) || !Double.isFinite(u)) {
-            return number(u);
+    static String scopeStatement(LotView lot) {
+        String first = "The results in section 5 relate only to the units tested.";
+        if (lot.plan().fullInspection() || lot.sampledSerials().size() == lot.quantity()) {
+            return first + " Every unit of the lot was tested.";
         }
-        return new java.math.BigDecimal(u).round(new java.math.MathContext(2)).stripTrailingZeros().toPlainString();
+        return first + " The lot decision is an acceptance-sampling decision under ISO 2859-1 on the sample of "
+                + lot.sampledSerials().size() + " units: it states whether the lot as a whole is accepted at the stated"
+                + " AQL and does not certify each of the " + (lot.quantity() - lot.sampledSerials().size())
+                + " unsampled units.";
     }
 
-    static String measured(double value, double u) {
-        if (!(u > 0) || !Double.isFinite(u) || !Double.isFinite(value)) {
-            return number(value);
+    private Map<String, String> decision(LotEvaluationView ev, Outcome outcome, String inputUnit, ZoneId zone) {
+        var plan = ev.lot().plan();
+        Map<String, String> decision = new LinkedHashMap<>();
+        decision.put("Nonconforming units", ev.nonconforming() + " of " + plan.sampleSize());
+        switch (outcome) {
+            case ACCEPTED -> {
+                decision.put("Decision", "ACCEPTED (d ≤ Ac)");
+                decision.put("Statement", "The lot conforms to the specification revision under the sampling plan"
+                        + " and decision rule stated.");
+            }
+            case CONCESSION -> {
+                decision.put("Decision", "REJECTED (d ≥ Re), released for use as is under concession");
+                decision.put("Statement", "The lot does not meet the specification under the sampling plan; it is"
+                        + " released for use as is only under the concession cited below.");
+            }
+            case REJECTED -> {
+                decision.put("Decision", "REJECTED (d ≥ Re)");
+                decision.put("Statement", "Nonconformity: the lot does not meet the specification revision under the"
+                        + " sampling plan and decision rule stated; it is not released.");
+            }
         }
-        int decimals = 1 - (int) Math.floor(Math.log10(u));
-        return new java.math.BigDecimal(value).setScale(decimals, java.math.RoundingMode.HALF_EVEN).stripTrailingZeros()
-                .toPlainString().replaceFirst("^-0$", "0");
+        ev.nonconformance().ifPresent(n -> {
+            decision.put("Nonconformance report", n.number());
+            String failing = failing(ev, inputUnit);
+            decision.put("Failing units and metrics", failing.isEmpty() ? "—" : failing);
+            decision.put("Disposition", n.action().name().replace('_', ' ').toLowerCase(Locale.ROOT));
+            n.concessionApprovedBy().ifPresent(by -> decision.put("Concession", "approved by " + name(by)
+                    + n.concessionApprovedAt().map(at -> " on " + ResultFormat.dateTime(at, zone)).orElse("")
+                    + " under nonconformance report " + n.number() + "; reason: " + n.concessionReason().orElse("")));
+            if (n.correctiveActionRequested()) {
+                decision.put("Corrective action", "requested from the supplier, due " + n.correctiveActionDue().map(Object::toString).orElse("—"));
+            }
+        });
+        return decision;
     }
 
-    private static String range(OptionalDouble lower, OptionalDouble upper) {
-        return (lower.isPresent() ? number(lower.getAsDouble()) : "−∞") + " … " + (upper.isPresent() ? number(upper.getAsDouble()) : "+∞");
+    /** "SN-3: nonlinearity (best-fit straight line) 0.31 %FSO FAIL; …" from the frozen results. */
+    private static String failing(LotEvaluationView ev, String inputUnit) {
+        return ev.units().stream()
+                .filter(u -> u.result().unitVerdict().map(v -> !v.isConforming() || v == Verdict.CONDITIONAL_FAIL).orElse(false))
+                .map(u -> u.serial() + ": " + EvaluationService.notPassing(u.result()).stream()
+                        .map(m -> m.metric().name().toLowerCase(Locale.ROOT).replace('_', ' ') + MetricWording.decidingPoint(m, inputUnit)
+                                + " " + measured(m) + " " + m.verdict().name())
+                        .collect(Collectors.joining(", ")))
+                .collect(Collectors.joining("; "));
     }
+
+    /**
+     * Deviations from the procedure as recorded (ISO/IEC 17025:2017 7.8.2.1 n): static and sweep readings
+     * taken with another reference than the procedure names. Other recorded deviations are added here, so
+     * that the section lists them all.
+     */
+    List<String> deviations(LotEvaluationView ev, Map<String, List<Reading>> readings) {
+        List<String> out = new ArrayList<>();
+        var content = ev.procedure().content();
+        String staticReference = content.staticCalibration() == null ? null : content.staticCalibration().referenceInstrument();
+        String sweepReference = content.frequencySweep() == null ? null : content.frequencySweep().referenceInstrument();
+        readings.forEach((serial, list) -> {
+            otherInstruments(list, ReadingTest.STATIC, staticReference).forEach(i -> out.add("Unit " + serial
+                    + ": static readings taken with " + i + " instead of the procedure's " + staticReference + "."));
+            otherInstruments(list, ReadingTest.SWEEP, sweepReference).forEach(i -> out.add("Unit " + serial
+                    + ": sweep readings taken with " + i + " instead of the procedure's " + sweepReference + "."));
+        });
+        // Conditions outside the procedure's limits, kept by the bench as deviations with their reasons.
+        ev.units().stream().filter(u -> u.conditionsDeviation().isPresent())
+                .forEach(u -> out.add("Unit " + u.serial() + ": " + u.conditionsDeviation().get()));
+        return out;
+    }
+
+    private static Set<String> otherInstruments(List<Reading> readings, ReadingTest test, String named) {
+        if (named == null || named.isBlank()) {
+            return Set.of();
+        }
+        return readings.stream().filter(r -> r.test() == test && r.instrument() != null && !r.instrument().isBlank()
+                && !r.instrument().equals(named)).map(Reading::instrument).collect(Collectors.toCollection(java.util.TreeSet::new));
+    }
+
+    static String measured(MetricResult m) {
+        return MetricWording.measured(m);
+    }
+
 }

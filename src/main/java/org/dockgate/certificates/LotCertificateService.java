@@ -53,6 +53,15 @@ public class LotCertificateService {
         };
     }
 
+    /**
+     * The title of the lot's document by outcome: "Certificate of conformance" (accepted), "Certificate of
+     * release under concession" (rejected, concession approved) or "Inspection report" (rejected).
+     */
+    @Transactional(readOnly = true)
+    public String documentTitle(long lotId) {
+        return LotCertificateRenderer.title(evaluation.lotEvaluation(lotId));
+    }
+
     /** The certificates already issued for a lot, newest first. */
     @Transactional(readOnly = true)
     public List<IssuedCertificate> forLot(long lotId) {
@@ -114,9 +123,10 @@ public class LotCertificateService {
         return ev;
     }
 
+    /** Every serial of the lot, sampled or not, so the register finds the certificate by any unit's serial. */
     private static CertificateSubject subject(LotEvaluationView ev) {
         return new CertificateSubject(ev.lot().id(), "Lot " + ev.lot().id() + " " + ev.lot().partNumber(),
-                ev.lot().supplierCode(), ev.lot().sampledSerials());
+                ev.lot().supplierCode(), ev.lot().serials());
     }
 
     private static String signedIn() {

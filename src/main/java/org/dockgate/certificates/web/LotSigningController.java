@@ -1,6 +1,7 @@
 package org.dockgate.certificates.web;
 
 import io.swagger.v3.oas.annotations.tags.Tag;
+import org.dockgate.certificates.CertificatePdfWriter;
 import org.dockgate.certificates.IssuedCertificate;
 import org.dockgate.certificates.LotCertificateService;
 import org.dockgate.evaluation.EvaluationService;
@@ -20,10 +21,12 @@ class LotSigningController {
 
     private final LotCertificateService certificates;
     private final EvaluationService evaluation;
+    private final CertificatePdfWriter pdfs;
 
-    LotSigningController(LotCertificateService certificates, EvaluationService evaluation) {
+    LotSigningController(LotCertificateService certificates, EvaluationService evaluation, CertificatePdfWriter pdfs) {
         this.certificates = certificates;
         this.evaluation = evaluation;
+        this.pdfs = pdfs;
     }
 
     @GetMapping("/certificates/lots/{id}")
@@ -32,7 +35,10 @@ class LotSigningController {
         model.addAttribute("issued", certificates.forLot(id));
         if (evaluation.lotEvaluation(id).lot().state() != org.dockgate.receiving.LotState.AWAITING_MEASUREMENT) {
             model.addAttribute("meaning", certificates.meaning(id));
+            model.addAttribute("documentTitle", certificates.documentTitle(id));
         }
+        // The QR code would point to this computer only: the signer sees it before signing.
+        model.addAttribute("localBaseUrl", pdfs.pointsToLocalhost() ? pdfs.publicBaseUrl() : null);
         return "certificates/lot-sign";
     }
 

@@ -128,7 +128,7 @@ final class DynamicMetrics {
     private static UncertaintyContribution standardDeviationLine(NoiseAnalysis analysis, double c) {
         int nu = analysis.n() - 1;
         return BudgetLines.typeA("Type A: uncertainty of a standard deviation of " + analysis.n()
-                        + " samples, s/√(2(N − 1)) (GUM E.4.3, clause from memory), ν = " + nu,
+                        + " samples, s/√(2(N − 1)) (GUM E.4.3), ν = " + nu, // clause number from memory; the source stays in the javadoc
                 analysis.rmsNoise() / Math.sqrt(2.0 * nu), nu, c);
     }
 

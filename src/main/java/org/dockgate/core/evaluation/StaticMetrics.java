@@ -232,7 +232,7 @@ final class StaticMetrics {
         double perOutput = 100.0 / sc.fullScaleOutput();
         List<UncertaintyContribution> lines = new ArrayList<>();
         lines.add(BudgetLines.typeA("Type A: uncertainty of a standard deviation with ν = " + nu
-                + " degrees of freedom, s_p/√(2ν) (GUM E.4.3, clause from memory)", s / Math.sqrt(2.0 * nu), nu,
+                + " degrees of freedom, s_p/√(2ν) (GUM E.4.3)", s / Math.sqrt(2.0 * nu), nu, // GUM E.4.3: clause number from memory
                 perOutput));
         lines.add(BudgetLines.none("reference certificate: its error at a set point is the same in every cycle and"
                 + " does not change the scatter, no contribution"));
