@@ -67,6 +67,11 @@ public class BenchService {
             + " supersedes_id, correction_reason, import_id,"
             + " (select s.id from bench_reading s where s.supersedes_id = r.id) as superseded_by";
 
+    /** {@link #COLUMNS} for readings known to be current (none supersedes them): no per-row subquery. */
+    static final String CURRENT_COLUMNS = COLUMNS.replace(
+            "(select s.id from bench_reading s where s.supersedes_id = r.id) as superseded_by",
+            "cast(null as bigint) as superseded_by");
+
     static final String INSERT = "insert into bench_reading (lot_id, serial, test, point, direction, cycle_no,"
             + " slot_no, revision_no, reading_value, unit, entered_value, entered_unit, instrument, recorded_by,"
             + " recorded_at, client_token, supersedes_id, correction_reason, import_id)"
@@ -536,6 +541,23 @@ public class BenchService {
         return new TreeSet<>(jdbc.queryForList("select distinct instrument from bench_reading r where lot_id = ?"
                 + " and serial = ? and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)",
                 String.class, lotId, serial));
+    }
+
+    /**
+     * The readings that count for every unit of a lot, in one query, by serial (each in the procedure's order):
+     * what {@link #currentReadings} gives per unit, for evaluating a whole lot. The columns are those of
+     * {@link #COLUMNS} without its per-row subquery for {@code superseded_by}, which is always empty here.
+     */
+    public Map<String, List<Reading>> currentReadingsByUnit(long lotId) {
+        Map<String, List<Reading>> out = new java.util.LinkedHashMap<>();
+        jdbc.query("select " + CURRENT_COLUMNS + " from bench_reading r where lot_id = ?"
+                        + " and not exists (select 1 from bench_reading s where s.supersedes_id = r.id)"
+                        + " order by serial, slot_no, revision_no",
+                rs -> {
+                    Reading reading = MAPPER.mapRow(rs, 0);
+                    out.computeIfAbsent(reading.serial(), k -> new ArrayList<>()).add(reading);
+                }, lotId);
+        return out;
     }
 
     /** Everyone who recorded or corrected a reading of the lot (for separation of duties). */

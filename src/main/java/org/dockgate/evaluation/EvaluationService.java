@@ -70,6 +70,8 @@ public class EvaluationService {
     private final Clock clock;
     private final JsonMapper json;
     private final org.dockgate.accounts.AccountService accounts;
+    private final tools.jackson.databind.ObjectReader unitReader;
+    private final tools.jackson.databind.ObjectReader resultReader;
 
     EvaluationService(ReceivingService receiving, BenchService bench, ProcedureService procedures,
                       CatalogueService catalogue, InstrumentService instruments, JdbcTemplate jdbc,
@@ -85,6 +87,11 @@ public class EvaluationService {
         this.events = events;
         this.clock = clock;
         this.json = json;
+        // Readers built once: frozen records are read back on every look at a dispositioned lot.
+        this.unitReader = json.readerFor(UnitEvaluationView.class)
+                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
+        this.resultReader = json.readerFor(UnitResult.class)
+                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
     }
 
     /** Evaluates one unit from its current readings (superseded readings are left out). */
@@ -99,7 +106,7 @@ public class EvaluationService {
             return frozen.get();
         }
         ApprovedProcedure procedure = procedures.revision(lot.procedureRevisionId()).orElseThrow();
-        return evaluate(lot, procedure, spec(procedure), serial, register());
+        return evaluate(lot, procedure, spec(procedure), serial, bench.currentReadings(lotId, serial), register());
     }
 
     /**
@@ -145,12 +152,17 @@ public class EvaluationService {
         return new Recheck(lotId, differences.isEmpty(), differences);
     }
 
+    /**
+     * Every sampled unit computed from its readings: the lot's current readings in one query, each instrument's
+     * register entry once for the whole lot.
+     */
     private List<UnitEvaluationView> recompute(LotView lot, ApprovedProcedure procedure) {
         SensorSpecification spec = spec(procedure);
         Function<String, Optional<InstrumentView>> register = register();
+        Map<String, List<Reading>> readings = bench.currentReadingsByUnit(lot.id());
         List<UnitEvaluationView> units = new ArrayList<>();
         for (String serial : lot.sampledSerials()) {
-            units.add(evaluate(lot, procedure, spec, serial, register));
+            units.add(evaluate(lot, procedure, spec, serial, readings.getOrDefault(serial, List.of()), register));
         }
         return units;
     }
@@ -302,9 +314,9 @@ public class EvaluationService {
         return json.writeValueAsString(value);
     }
 
-    /** The frozen record of one unit, if the lot is dispositioned. */
+    /** The frozen record of one unit, if the lot is dispositioned (only its own row is read). */
     private Optional<UnitEvaluationView> frozen(long lotId, String serial) {
-        return Optional.ofNullable(frozenUnits(lotId).get(serial));
+        return Optional.ofNullable(frozenUnits(lotId, serial).get(serial));
     }
 
     /**
@@ -313,25 +325,28 @@ public class EvaluationService {
      * operators and instruments of the row; their chart points and calibration records were not frozen.
      */
     private Map<String, UnitEvaluationView> frozenUnits(long lotId) {
+        return frozenUnits(lotId, null);
+    }
+
+    /** As {@link #frozenUnits(long)}, only the row of {@code serial} when it is given. */
+    private Map<String, UnitEvaluationView> frozenUnits(long lotId, String serial) {
         Map<String, UnitEvaluationView> out = new java.util.LinkedHashMap<>();
-        jdbc.query("select serial, result_json, unit_json, operators, instruments from unit_evaluation_snapshot"
-                + " where lot_id = ? order by id", rs -> {
+        String sql = "select serial, result_json, unit_json, operators, instruments from unit_evaluation_snapshot"
+                + " where lot_id = ?" + (serial == null ? "" : " and serial = ?") + " order by id";
+        Object[] args = serial == null ? new Object[] {lotId} : new Object[] {lotId, serial};
+        jdbc.query(sql, rs -> {
                     String unitJson = rs.getString(3);
                     UnitEvaluationView view;
                     if (unitJson != null) {
-                        view = json.readerFor(UnitEvaluationView.class)
-                                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-                                .readValue(unitJson);
+                        view = unitReader.readValue(unitJson);
                     } else {
-                        UnitResult result = json.readerFor(UnitResult.class)
-                                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-                                .readValue(rs.getString(2));
+                        UnitResult result = resultReader.readValue(rs.getString(2));
                         view = new UnitEvaluationView(rs.getString(1), result, 0, split(rs.getString(4)),
                                 split(rs.getString(5)), Optional.empty(), Optional.empty(), List.of(), List.of(), List.of(), true,
                                 Optional.empty());
                     }
                     out.put(rs.getString(1), view.asFrozen());
-                }, lotId);
+                }, args);
         return out;
     }
 
@@ -347,8 +362,7 @@ public class EvaluationService {
     }
 
     private UnitEvaluationView evaluate(LotView lot, ApprovedProcedure procedure, SensorSpecification spec, String serial,
-                                        Function<String, Optional<InstrumentView>> register) {
-        List<Reading> readings = bench.currentReadings(lot.id(), serial);
+                                        List<Reading> readings, Function<String, Optional<InstrumentView>> register) {
         UnitMeasurements.Builder m = UnitMeasurements.builder();
         List<UnitEvaluationView.StaticPoint> statics = new ArrayList<>();
         List<UnitEvaluationView.SweepPoint> sweep = new ArrayList<>();

@@ -1,5 +1,7 @@
 package org.dockgate.core.uncertainty;
 
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.apache.commons.math3.distribution.TDistribution;
 import org.dockgate.core.InputChecks;
@@ -15,6 +17,18 @@ public final class CoverageFactor {
     static final double NORMAL_ABOVE_DEGREES_OF_FREEDOM = 1.0e6;
 
     private static final NormalDistribution STANDARD_NORMAL = new NormalDistribution(null, 0.0, 1.0);
+
+    /**
+     * k_p by (p, ⌊ν⌋): a unit's evaluation asks for the same few ν hundreds of times (every point's budget), and the
+     * Student-t quantile is an iterative solve. The value is a pure function of the key, so a cached k is the k a
+     * fresh computation gives, bit for bit. Bounded: beyond this many keys new ones are computed, not kept.
+     */
+    static final int CACHE_LIMIT = 4096;
+
+    private record Key(double coverageProbability, double degreesOfFreedom) {
+    }
+
+    private static final Map<Key, Double> CACHE = new ConcurrentHashMap<>();
 
     private CoverageFactor() {
     }
@@ -34,12 +48,19 @@ public final class CoverageFactor {
     public static double forProbability(double coverageProbability, double degreesOfFreedom) {
         InputChecks.probability("coverageProbability", coverageProbability);
         InputChecks.degreesOfFreedom("degreesOfFreedom", degreesOfFreedom);
-        double quantile = (1.0 + coverageProbability) / 2.0;
         double nu = truncatedDegreesOfFreedom(degreesOfFreedom);
-        if (nu > NORMAL_ABOVE_DEGREES_OF_FREEDOM) {
-            return STANDARD_NORMAL.inverseCumulativeProbability(quantile);
+        Key key = new Key(coverageProbability, nu > NORMAL_ABOVE_DEGREES_OF_FREEDOM ? Double.POSITIVE_INFINITY : nu);
+        Double cached = CACHE.get(key);
+        if (cached != null) {
+            return cached;
         }
-        return new TDistribution(null, nu).inverseCumulativeProbability(quantile);
+        double quantile = (1.0 + coverageProbability) / 2.0;
+        double k = nu > NORMAL_ABOVE_DEGREES_OF_FREEDOM ? STANDARD_NORMAL.inverseCumulativeProbability(quantile)
+                : new TDistribution(null, nu).inverseCumulativeProbability(quantile);
+        if (CACHE.size() < CACHE_LIMIT) {
+            CACHE.putIfAbsent(key, k);
+        }
+        return k;
     }
 
     /**

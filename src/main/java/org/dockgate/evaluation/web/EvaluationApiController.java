@@ -1,17 +1,18 @@
 package org.dockgate.evaluation.web;
 
 import io.swagger.v3.oas.annotations.Operation;
+import io.swagger.v3.oas.annotations.Parameter;
 import io.swagger.v3.oas.annotations.tags.Tag;
 import java.time.LocalDate;
 import org.dockgate.evaluation.DispositionAction;
 import org.dockgate.evaluation.EvaluationService;
-import org.dockgate.evaluation.LotEvaluationView;
 import org.dockgate.evaluation.NonconformanceReport;
 import org.dockgate.evaluation.Recheck;
 import org.springframework.web.bind.annotation.GetMapping;
 import org.springframework.web.bind.annotation.PathVariable;
 import org.springframework.web.bind.annotation.PostMapping;
 import org.springframework.web.bind.annotation.RequestBody;
+import org.springframework.web.bind.annotation.RequestParam;
 import org.springframework.web.bind.annotation.RestController;
 
 @RestController
@@ -32,9 +33,16 @@ class EvaluationApiController {
     }
 
     @GetMapping("/api/v1/lots/{id}/evaluation")
-    @Operation(summary = "Each sampled unit's metrics, uncertainty budgets and verdicts, and the lot's tally so far")
-    LotEvaluationView evaluation(@PathVariable long id) {
-        return evaluation.lotEvaluation(id);
+    @Operation(summary = "Each sampled unit's metrics and verdicts, and the lot's tally so far",
+            description = "Compact by default: per unit its verdict and per metric value, U, k, ν_eff, tolerance and"
+                    + " acceptance limits, verdict and p_c. detail=budgets adds each metric's budget lines, its note,"
+                    + " the per-point checks and the chart points. Absent or infinite figures (ν_eff = ∞) are null."
+                    + " After disposition the answer is the frozen record (frozen: true).")
+    EvaluationResponse evaluation(@PathVariable long id,
+                                  @Parameter(description = "budgets for the budget lines; absent for the compact answer")
+                                  @RequestParam(required = false) String detail) {
+        EvaluationResponse.Detail level = EvaluationResponse.Detail.of(detail);
+        return EvaluationResponse.of(evaluation.lotEvaluation(id), level);
     }
 
     @GetMapping("/api/v1/lots/{id}/evaluation/recheck")
@@ -50,13 +58,13 @@ class EvaluationApiController {
     @Operation(summary = "Disposition a lot whose sample is complete (ENGINEER)",
             description = "Accept or reject follows from Ac/Re; for a rejected lot give the action. Lot state, switching"
                     + " state, frozen unit results and the nonconformance report commit together.")
-    LotEvaluationView disposition(@PathVariable long id, @RequestBody DispositionRequest request) {
+    EvaluationResponse disposition(@PathVariable long id, @RequestBody DispositionRequest request) {
         if (request.expectedLotVersion() == null) {
             throw new IllegalArgumentException("'expectedLotVersion' is required (the lot's version you have seen).");
         }
-        return evaluation.disposition(id, request.action(), request.notes(),
+        return EvaluationResponse.of(evaluation.disposition(id, request.action(), request.notes(),
                 Boolean.TRUE.equals(request.correctiveActionRequested()), request.correctiveActionDue(),
-                request.expectedLotVersion());
+                request.expectedLotVersion()), EvaluationResponse.Detail.SUMMARY);
     }
 
     @PostMapping("/api/v1/lots/{id}/concession")

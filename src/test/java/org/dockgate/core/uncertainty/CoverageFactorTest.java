@@ -105,4 +105,32 @@ class CoverageFactorTest {
     void rejectsDegreesOfFreedomBelowOne(double nu) {
         assertThrows(IllegalArgumentException.class, () -> CoverageFactor.forProbability(0.95, nu));
     }
+
+    /**
+     * k is remembered per (p, ⌊ν⌋): asked in a shuffled order, for several p and ν (integer and not, and above
+     * 10⁶), every answer is still the quantile computed afresh — a key that mixed up p or ν would show here.
+     */
+    @Test
+    void rememberedCoverageFactorsAreThoseComputedAfresh() {
+        double[] probabilities = {0.6826894921370859, 0.95, CoverageFactor.normalCoverageProbability(2.0), 0.99};
+        java.util.List<double[]> asks = new java.util.ArrayList<>();
+        for (double p : probabilities) {
+            for (int nu = 1; nu <= 60; nu++) {
+                asks.add(new double[] {p, nu});
+                asks.add(new double[] {p, nu + 0.5});
+            }
+            asks.add(new double[] {p, 2.0e6});
+            asks.add(new double[] {p, Double.POSITIVE_INFINITY});
+        }
+        java.util.Collections.shuffle(asks, new java.util.Random(11));
+        for (int pass = 0; pass < 2; pass++) {
+            for (double[] ask : asks) {
+                double nu = Math.floor(ask[1]);
+                double quantile = (1.0 + ask[0]) / 2.0;
+                double fresh = nu > 1.0e6 ? new NormalDistribution(null, 0, 1).inverseCumulativeProbability(quantile)
+                        : new org.apache.commons.math3.distribution.TDistribution(null, nu).inverseCumulativeProbability(quantile);
+                assertEquals(fresh, CoverageFactor.forProbability(ask[0], ask[1]), 0.0, "p " + ask[0] + ", ν " + ask[1]);
+            }
+        }
+    }
 }
