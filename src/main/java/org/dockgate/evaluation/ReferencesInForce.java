@@ -8,9 +8,11 @@ import java.util.Optional;
 import java.util.function.Function;
 import java.util.stream.Collectors;
 import org.dockgate.bench.Reading;
+import org.dockgate.core.UnevaluableException;
 import org.dockgate.core.evaluation.ReferenceUncertainty;
 import org.dockgate.instruments.CalibrationRecord;
 import org.dockgate.instruments.InstrumentView;
+import org.dockgate.instruments.OutsideCalibratedRangeException;
 
 /**
  * The reference a group of readings (a unit's static readings, or its sweep) was taken with, built from the
@@ -24,6 +26,9 @@ import org.dockgate.instruments.InstrumentView;
  * that point (among all records of the group for any other input, e.g. a sweep amplitude), expressed with
  * the k of the last record used: the budget keeps the worst certificate that served the point
  * (conservative; common practice).
+ *
+ * <p>A static reading whose point lies outside the range the record in force was calibrated over is not used:
+ * it is named in the problems (the result is incomplete), and a metric that needs U there is not evaluable.
  */
 final class ReferencesInForce {
 
@@ -56,6 +61,14 @@ final class ReferencesInForce {
                         + " the reading with an instrument that was in calibration.");
                 continue;
             }
+            if (matchByPoint && !instrument.get().inCalibratedRange(record.get(), r.point(), inputUnit)) {
+                // The certificate says nothing about that point: the instrument cannot serve it.
+                problems.add("The reading at " + r.point() + " " + inputUnit + " (" + r.test() + ") was taken with "
+                        + r.instrument() + ", calibrated over " + instrument.get().calibratedRange(record.get())
+                        + " only (certificate " + record.get().certificateNumber() + "): the point lies outside the"
+                        + " range of the reference in force; correct the reading with an instrument calibrated there.");
+                continue;
+            }
             uses.add(new Use(instrument.get(), record.get(), r.point()));
         }
         if (uses.isEmpty()) {
@@ -75,7 +88,7 @@ final class ReferencesInForce {
         if (distinct.size() == 1) {
             Use only = distinct.values().iterator().next();
             return Optional.of(new ReferenceUncertainty(name,
-                    x -> only.instrument().expandedUncertaintyAt(only.record(), x, inputUnit),
+                    x -> uncertaintyAt(only, x, inputUnit),
                     only.record().coverageFactor()));
         }
         Use last = uses.stream().max((a, b) -> a.record().recordedAt().compareTo(b.record().recordedAt())).orElseThrow();
@@ -85,11 +98,19 @@ final class ReferencesInForce {
             List<Use> atPoint = matchByPoint ? uses.stream().filter(u -> samePoint(u.point(), x)).toList() : List.of();
             double u = 0;
             for (Use use : atPoint.isEmpty() ? all : atPoint) {
-                u = Math.max(u, use.instrument().expandedUncertaintyAt(use.record(), x, inputUnit)
-                        / use.record().coverageFactor());
+                u = Math.max(u, uncertaintyAt(use, x, inputUnit) / use.record().coverageFactor());
             }
             return u * k;
         }, k));
+    }
+
+    /** U of a record at x; a point outside its calibrated range leaves the metric not evaluable, with the reason. */
+    private static double uncertaintyAt(Use use, double x, String inputUnit) {
+        try {
+            return use.instrument().expandedUncertaintyAt(use.record(), x, inputUnit);
+        } catch (OutsideCalibratedRangeException e) {
+            throw new UnevaluableException(e.getMessage());
+        }
     }
 
     private static boolean samePoint(double a, double b) {

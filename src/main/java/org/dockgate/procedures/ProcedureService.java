@@ -80,7 +80,8 @@ public class ProcedureService {
 
     /**
      * The register's instruments as the core's candidates: those of the measurand's quantity, in
-     * calibration today, converted to the specification's input unit. A chosen instrument replaces the
+     * calibration today, with the range their current calibration covers, converted to the specification's
+     * input unit. A chosen instrument replaces the
      * candidates of its test; it must itself qualify.
      */
     List<ReferenceCandidate> candidates(SensorSpecification spec, String staticChoice, String sweepChoice) {
@@ -94,8 +95,9 @@ public class ProcedureService {
             if (!v.selectable()) {
                 continue;
             }
-            double min = Units.convert(v.rangeMin(), v.unit(), unit);
-            double max = Units.convert(v.rangeMax(), v.unit(), unit);
+            // The range its current calibration covers: outside it the instrument cannot serve a point.
+            double min = Units.convert(v.calibratedMin(v.current()), v.unit(), unit);
+            double max = Units.convert(v.calibratedMax(v.current()), v.unit(), unit);
             double k = v.current().coverageFactor();
             String id = v.identifier();
             java.util.function.DoubleUnaryOperator u = x -> instruments.expandedUncertaintyAt(id, x, unit);

@@ -118,7 +118,7 @@ class InstrumentViewTest {
     void aValueOutsideTheRangeHasNoUncertainty() {
         InstrumentView v = view(0, 7, "bar", new UncertaintyBand(7, 0.02, UncertaintyMode.PERCENT_OF_READING));
         assertThatThrownBy(() -> v.expandedUncertaintyAt(8, "bar")).isInstanceOf(IllegalArgumentException.class)
-                .hasMessage("RI-TEST covers 0 to 7 bar; 8 bar lies outside it.");
+                .hasMessage("RI-TEST is calibrated over 0 … 7 bar (certificate C-1); 8 bar lies outside it.");
     }
 
     @ParameterizedTest(name = "due {0} days after today: {1}")

@@ -54,6 +54,29 @@ final class BudgetLines {
                 expanded, r.coverageFactor()).withSensitivityCoefficient(sensitivityCoefficient);
     }
 
+    /**
+     * The reference certificate as a point error over several set points: u = max U(x_i)/k over the set points
+     * x_i (GUM 4.3.3), carried by c. A figure that depends on the reference's errors at every set point (the
+     * deviation from a fitted or end-point line) takes the largest, so its U does not depend on which set point
+     * the largest deviation happens to fall on.
+     */
+    static UncertaintyContribution referenceLargest(Optional<ReferenceUncertainty> reference,
+            java.util.Collection<Double> inputs, String inputUnit, double sensitivityCoefficient, String how) {
+        if (reference.isEmpty()) {
+            return none("reference certificate: not recorded, no contribution (the evaluation is incomplete)");
+        }
+        double at = inputs.iterator().next();
+        double largest = -1;
+        for (double x : inputs) {
+            double u = reference.get().expandedAt(x);
+            if (u > largest) {
+                largest = u;
+                at = x;
+            }
+        }
+        return reference(reference, at, inputUnit, sensitivityCoefficient, how);
+    }
+
     /** The readout's digit δ: rectangular with half-width δ/2, u = δ/(2√3) (GUM F.2.2.1), carried by c. */
     static UncertaintyContribution resolution(OptionalDouble digit, String outputUnit, double sensitivityCoefficient,
             String how) {

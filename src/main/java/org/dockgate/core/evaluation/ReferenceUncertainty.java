@@ -10,6 +10,24 @@ import org.dockgate.core.procedure.ReferenceCandidate;
  * uncertainty U at an input value (in the unit of that input) and the coverage factor k the certificate
  * states it with. The standard uncertainty of the stimulus is u = U/k (GUM 4.3.3).
  *
+ * <p><b>How the reference's error enters each metric</b> (one model, applied the same way in the evaluation
+ * and in the procedure derivation). The reference applies its set point x with an error e(x), unknown but the
+ * same for every reading taken at that set point (a systematic error of the certificate, u(e(x)) = U(x)/k):
+ * <ul>
+ *   <li>it <b>cancels in a difference at one set point</b>: hysteresis (UP mean − DOWN mean at x) and
+ *       repeatability (scatter about the mean at x) get a line of zero that says so, and no TUR against
+ *       the reference is planned for them;</li>
+ *   <li>it enters the <b>sensitivity as a scale error</b>: e(x) in proportion to x, u(S) = S·u(x_top)/x_top
+ *       at the top point (c = S/x);</li>
+ *   <li>it enters as a <b>point error</b> where a figure compares one reading with a value it should have:
+ *       the zero offset (at the set point nearest zero, c = S), each reading's accuracy error (c = 100/span)
+ *       and RTD temperature error (c = 1) at its own set point, and the nonlinearity (deviation from a line
+ *       that every set point helps fix) with the largest u over the set points (c = 100/span), so its U does
+ *       not depend on where the largest deviation falls.</li>
+ * </ul>
+ * The register never gives U = 0 (U = max(floor, a + b·|x|) over the calibrated range, see the instruments
+ * module); a function given here may still return 0 (e.g. {@link #constant} in a test).
+ *
  * @param instrument            the instrument's identifier, shown in budget lines
  * @param expandedUncertaintyAt U(x) at an input x, in input units; must give a finite value ≥ 0
  * @param coverageFactor        k of the certificate, finite and greater than 0

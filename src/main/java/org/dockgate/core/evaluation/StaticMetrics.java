@@ -102,7 +102,8 @@ final class StaticMetrics {
                         sc.fit().degreesOfFreedom(), 1.0)
                 : BudgetLines.none("Type A: two readings only, the slope's scatter cannot be evaluated"));
         lines.add(BudgetLines.reference(context.staticReference(), top, in, Math.abs(slope) / Math.abs(top),
-                ", the top point, taken as a scale error: c = S/x"));
+                ", the top point; the slope takes the reference's error as a scale error (in proportion to the"
+                        + " input): c = S/x"));
         lines.add(BudgetLines.resolution(context.readoutResolution(), out, f / Math.sqrt(sxx),
                 ", independent at each reading: c = 1/√S_xx"));
         lines.addAll(BudgetLines.environment(context.environment(), "sensitivity", slope, 1.0, Double.NaN, 0));
@@ -128,7 +129,7 @@ final class StaticMetrics {
                         sc.offsetStdUncertainty().getAsDouble() * f, sc.fit().degreesOfFreedom(), 1.0)
                 : BudgetLines.none("Type A: two readings only, the intercept's scatter cannot be evaluated"));
         lines.add(BudgetLines.reference(context.staticReference(), nearestZero, in, Math.abs(sc.sensitivity()) * f,
-                ", the point nearest zero input: c = S"));
+                ", the point nearest zero input; the offset takes the reference's error there as a point error: c = S"));
         lines.add(BudgetLines.resolution(context.readoutResolution(), out,
                 f * Math.sqrt(1.0 / x.length + mean * mean / sxx), ", independent at each reading: c = √(1/n + x̄²/S_xx)"));
         lines.addAll(BudgetLines.environment(context.environment(), "zero offset", offset, 1.0,
@@ -168,8 +169,9 @@ final class StaticMetrics {
                         sc.repeatabilityStdDev().getAsDouble() / Math.sqrt(n), sc.repeatabilityDegreesOfFreedom(),
                         perOutput)
                 : BudgetLines.none("Type A: no set point read twice from one direction, scatter not evaluated"));
-        lines.add(BudgetLines.reference(context.staticReference(), worstInput, in, 100.0 / spec.span(),
-                ", the set point of the largest deviation: c = 100/span"));
+        lines.add(BudgetLines.referenceLargest(context.staticReference(), curve.keySet(), in, 100.0 / spec.span(),
+                ", the largest over the set points; the deviation from a line takes the reference's error as a"
+                        + " point error, and every set point fixes the line: c = 100/span"));
         lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 100/FSO"));
         lines.addAll(BudgetLines.environment(context.environment(), "nonlinearity", Double.NaN, 0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
@@ -208,8 +210,8 @@ final class StaticMetrics {
                         sc.repeatabilityStdDev().getAsDouble() * Math.sqrt(1.0 / nUp + 1.0 / nDown),
                         sc.repeatabilityDegreesOfFreedom(), perOutput)
                 : BudgetLines.none("Type A: no set point read twice from one direction, scatter not evaluated"));
-        lines.add(BudgetLines.reference(context.staticReference(), worstInput, in, 100.0 / spec.span(),
-                ", as the procedure planned it: c = 100/span"));
+        lines.add(BudgetLines.none("reference certificate: its error at a set point is common to the UP and DOWN"
+                + " readings there and cancels in their difference, no contribution"));
         lines.add(BudgetLines.resolution(context.readoutResolution(), out, Math.sqrt(2.0) * perOutput,
                 ", two readings differenced: c = √2·100/FSO"));
         lines.addAll(BudgetLines.environment(context.environment(), "hysteresis", Double.NaN, 0, Double.NaN, 0));
@@ -234,8 +236,8 @@ final class StaticMetrics {
         lines.add(BudgetLines.typeA("Type A: uncertainty of a standard deviation with ν = " + nu
                 + " degrees of freedom, s_p/√(2ν) (GUM E.4.3)", s / Math.sqrt(2.0 * nu), nu, // GUM E.4.3: clause number from memory
                 perOutput));
-        lines.add(BudgetLines.none("reference certificate: its error at a set point is the same in every cycle and"
-                + " does not change the scatter, no contribution"));
+        lines.add(BudgetLines.none("reference certificate: its error at a set point is common to every cycle there"
+                + " and cancels in the scatter about the point's mean, no contribution"));
         lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 100/FSO"));
         lines.addAll(BudgetLines.environment(context.environment(), "repeatability", Double.NaN, 0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
@@ -265,7 +267,8 @@ final class StaticMetrics {
                             characteristics.repeatabilityStdDev().getAsDouble(),
                             characteristics.repeatabilityDegreesOfFreedom(), perOutput)
                     : BudgetLines.none("Type A: no set point read twice from one direction, scatter not evaluated"));
-            lines.add(BudgetLines.reference(context.staticReference(), p.input(), in, 100.0 / span, ": c = 100/span"));
+            lines.add(BudgetLines.reference(context.staticReference(), p.input(), in, 100.0 / span,
+                    ", this reading's set point; a point error: c = 100/span"));
             lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput,
                     ": c = 100/(span·S_nominal)"));
             lines.addAll(BudgetLines.environment(context.environment(), "accuracy", p.output(), perOutput, nominalFso,
@@ -314,7 +317,7 @@ final class StaticMetrics {
                             characteristics.repeatabilityDegreesOfFreedom(), perOutput)
                     : BudgetLines.none("Type A: single readings at each temperature, scatter not evaluated"));
             lines.add(BudgetLines.reference(context.staticReference(), p.input(), in, celsiusPerInput,
-                    ": c = 1 (the error is t(R) − t_reference)"));
+                    ", this reading's set point; a point error: c = 1 (the error is t(R) − t_reference)"));
             lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 1/(dR/dt)"));
             lines.addAll(BudgetLines.environment(context.environment(), "temperature error", p.output(), perOutput,
                     fsoOhm / ohmPerOutput, perOutput));

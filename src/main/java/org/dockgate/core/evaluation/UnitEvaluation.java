@@ -54,10 +54,12 @@ import org.dockgate.core.uncertainty.CoverageFactor;
  *       readings s_p/√n (nonlinearity), a difference of two means s_p·√(1/n_up + 1/n_dn) (hysteresis), one
  *       reading s_p (accuracy, RTD), all with the pooled ν; a standard deviation s/√(2ν) (repeatability, noise;
  *       GUM E.4.3, from memory);</li>
- *   <li>Type B from the reference certificate, u = U(x)/k (GUM 4.3.3) at the set point that matters, with a
- *       sensitivity coefficient (GUM 5.1.3): S/x at the top point for the slope (a scale error, as the procedure
- *       plans it), S at the point nearest zero for the offset, 100/span for %FSO figures, 1 for an RTD's error;
- *       none for repeatability and noise (no effect on a scatter);</li>
+ *   <li>Type B from the reference certificate, u = U(x)/k (GUM 4.3.3), by the model stated in
+ *       {@link ReferenceUncertainty}: a scale error for the slope (S/x at the top point), a point error for the
+ *       offset (S at the point nearest zero), each reading's accuracy and RTD error (100/span, 1, at its own set
+ *       point) and the nonlinearity (100/span with the largest u over the set points); a line of zero for
+ *       hysteresis and repeatability (a common error at a set point cancels in differences there) and for noise
+ *       (no stimulus at zero input);</li>
  *   <li>Type B from the readout's digit δ, rectangular with half-width δ/2 (GUM F.2.2.1), carried to the metric
  *       (1/√S_xx for the slope, √(1/n + x̄²/S_xx) for the offset, 100/FSO for %FSO figures, 1/S for input units);</li>
  *   <li>Type B from the environment when recorded with a temperature coefficient ({@link Environment}); a line

@@ -43,8 +43,14 @@ import org.dockgate.core.series.Direction;
  *       near the limit, and beyond it), the limit itself included.</li>
  *   <li>Acceptance limits from the decision policy with the planned reference instrument's expanded
  *       uncertainty (core decision rules), and TUR = (TU − TL)/(2U) (ANSI/NCSL Z540.3 fallback ratio,
- *       4:1 adequate). For a one-sided upper limit L on a non-negative metric (nonlinearity, hysteresis,
- *       repeatability) the natural lower bound 0 gives the span: TUR = L / (2U), common practice.</li>
+ *       4:1 adequate). For a one-sided upper limit L on a non-negative metric (nonlinearity) the natural
+ *       lower bound 0 gives the span: TUR = L / (2U), common practice. The planned U follows the reference
+ *       model of {@code org.dockgate.core.evaluation.ReferenceUncertainty}: the relative U at the top point
+ *       carried to the slope (scale error), U at the point nearest zero times S (offset), the largest U over
+ *       the points (accuracy, nonlinearity; point error), U at the tightest point (RTD); hysteresis and
+ *       repeatability get no reference U and no TUR, since a common error at a set point cancels in them.</li>
+ *   <li>A reference instrument serves the static calibration only when every point lies inside the range its
+ *       calibration covers; otherwise another is chosen, or the reasoning names the points and ranges.</li>
  * </ul>
  */
 public final class ProcedureDerivation {
@@ -104,15 +110,18 @@ public final class ProcedureDerivation {
         if (spec.zeroOffset() != null && spec.sensitivity() != null) {
             var z = spec.zeroOffset();
             Tolerance tol = Tolerance.between(z.nominal() - z.tolerance(), z.nominal() + z.tolerance());
+            double nearestZero = statics.pointsInput().stream().min(Comparator.comparingDouble(Math::abs)).orElseThrow();
             OptionalDouble u = staticRef.map(r -> {
                 double sensitivityInOutputPerInput = Units.convert(spec.sensitivity().nominal(),
                         spec.sensitivity().unit(), "(" + spec.outputUnit() + ")/(" + spec.inputUnit() + ")");
-                double uOut = r.expandedUncertaintyAt().applyAsDouble(0.0) * Math.abs(sensitivityInOutputPerInput);
+                double uOut = r.expandedUncertaintyAt().applyAsDouble(nearestZero) * Math.abs(sensitivityInOutputPerInput);
                 return OptionalDouble.of(Units.convert(uOut, spec.outputUnit(), z.unit()));
             }).orElse(OptionalDouble.empty());
             acceptance.add(metric(Metric.ZERO_OFFSET, z.unit(), tol, u, k, policy, refId,
                     "Output at zero input, " + fmt(z.nominal()) + " ± " + fmt(z.tolerance()) + " " + z.unit()
-                            + "; planned U is the reference's uncertainty at zero times the nominal sensitivity.",
+                            + "; planned U is the reference's uncertainty at the point nearest zero ("
+                            + fmt(nearestZero) + " " + spec.inputUnit() + ", a point error) times the nominal"
+                            + " sensitivity.",
                     false));
         }
         OptionalDouble uPctFso = stimulusU.isPresent()
@@ -121,25 +130,30 @@ public final class ProcedureDerivation {
             double a = spec.accuracyPctFso();
             acceptance.add(metric(Metric.ACCURACY, "%FSO", Tolerance.between(-a, a), uPctFso, k, policy, refId,
                     "Largest error against the nominal transfer function within ± " + fmt(a)
-                            + " %FSO; planned U is the reference's largest uncertainty over the points in %FSO.",
+                            + " %FSO; planned U is the reference's largest uncertainty over the points in %FSO"
+                            + " (a point error at each reading).",
                     false));
         }
         if (spec.nonlinearityPctFso() != null) {
             acceptance.add(metric(Metric.NONLINEARITY, "%FSO", Tolerance.atMost(spec.nonlinearityPctFso()), uPctFso,
                     k, policy, refId, (spec.nonlinearityReference() == SensorSpecification.NonlinearityReference.TERMINAL
                             ? "Terminal" : "Best-fit") + " nonlinearity at most " + fmt(spec.nonlinearityPctFso())
-                            + " %FSO; TUR from the span 0 … limit.", true));
+                            + " %FSO; reference U the largest over the points in %FSO (every point fixes the"
+                            + " line); TUR from the span 0 … limit.", true));
         }
+        String cancels = "; the reference's error at a set point is common to the readings compared there and"
+                + " cancels, so no reference uncertainty and no TUR apply: U comes from the readings' scatter and"
+                + " the readout at evaluation.";
         if (spec.hysteresisPctFso() != null) {
-            acceptance.add(metric(Metric.HYSTERESIS, "%FSO", Tolerance.atMost(spec.hysteresisPctFso()), uPctFso, k,
-                    policy, refId, "Hysteresis at most " + fmt(spec.hysteresisPctFso())
-                            + " %FSO from ascending and descending points; TUR from the span 0 … limit.", true));
+            acceptance.add(metric(Metric.HYSTERESIS, "%FSO", Tolerance.atMost(spec.hysteresisPctFso()),
+                    OptionalDouble.empty(), k, policy, refId, "Hysteresis at most " + fmt(spec.hysteresisPctFso())
+                            + " %FSO from ascending and descending points" + cancels, true));
         }
         if (spec.repeatabilityPctFso() != null) {
             acceptance.add(metric(Metric.REPEATABILITY, "%FSO", Tolerance.atMost(spec.repeatabilityPctFso()),
-                    uPctFso, k, policy, refId, "Repeatability (pooled standard deviation over "
+                    OptionalDouble.empty(), k, policy, refId, "Repeatability (pooled standard deviation over "
                             + statics.cycles() + " cycles) at most " + fmt(spec.repeatabilityPctFso())
-                            + " %FSO; TUR from the span 0 … limit.", true));
+                            + " %FSO" + cancels, true));
         }
         if (spec.rtd() != null) {
             ToleranceClass cls = ToleranceClass.parse(spec.rtd().toleranceClass());
@@ -271,9 +285,10 @@ public final class ProcedureDerivation {
         why.add(cycles == 3 ? "Three cycles, because repeatability is specified." : "One cycle: no repeatability is specified.");
         why.add("Settle " + spec.kind().settleSeconds() + " s per point for a " + spec.kind().name().toLowerCase()
                 .replace('_', ' ') + ".");
-        why.add(ref.map(r -> "Reference " + r.identifier() + ": in calibration, covers " + fmt(min) + " … " + fmt(max)
-                + " " + spec.inputUnit() + " with the smallest uncertainty.").orElse(
-                "No reference instrument in calibration covers " + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit() + "."));
+        why.add(ref.map(r -> "Reference " + r.identifier() + ": in calibration, calibrated over every point ("
+                + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit() + ") with the smallest uncertainty.").orElse(
+                "No reference instrument in calibration covers " + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit()
+                        + "." + outOfRange(candidates, TestKind.STATIC_CALIBRATION, inputs, spec.inputUnit())));
         return new StaticCalibration(percent, inputs, spec.inputUnit(), directions, cycles, spec.kind().settleSeconds(),
                 ref.map(ReferenceCandidate::identifier).orElse(null), why);
     }
@@ -332,8 +347,9 @@ public final class ProcedureDerivation {
         AcceptanceLimits limits = policy.acceptanceLimits(tolerance, expanded);
         OptionalDouble tur;
         if (oneSidedFromZero && tolerance.upper().isPresent() && tolerance.lower().isEmpty()) {
+            // U = 0 would be a ratio without meaning (the register never gives it; a TUR is then left out).
             tur = u.getAsDouble() > 0 ? OptionalDouble.of(tolerance.upper().getAsDouble() / (2 * u.getAsDouble()))
-                    : OptionalDouble.of(Double.POSITIVE_INFINITY);
+                    : OptionalDouble.empty();
         } else {
             tur = DecisionPolicy.testUncertaintyRatio(tolerance, expanded);
         }
@@ -351,6 +367,27 @@ public final class ProcedureDerivation {
                                                      double max, double at) {
         return candidates.stream().filter(c -> c.test() == test && c.covers(min, max))
                 .min(Comparator.comparingDouble(c -> c.expandedUncertaintyAt().applyAsDouble(at)));
+    }
+
+    /**
+     * Why the candidates of a test do not qualify: per candidate, the points outside its calibrated range, e.g.
+     * " RI-PRS-01 is calibrated over 0.2 … 20 bar only: 0 bar lies outside."
+     */
+    static String outOfRange(List<ReferenceCandidate> candidates, TestKind test, List<Double> points, String unit) {
+        StringBuilder why = new StringBuilder();
+        for (ReferenceCandidate c : candidates) {
+            if (c.test() != test) {
+                continue;
+            }
+            List<String> outside = points.stream().filter(x -> !c.covers(x, x)).map(ProcedureDerivation::fmt).toList();
+            if (!outside.isEmpty()) {
+                why.append(" ").append(c.identifier()).append(" is calibrated over ").append(fmt(c.rangeMin()))
+                        .append(" … ").append(fmt(c.rangeMax())).append(" ").append(unit).append(" only: ")
+                        .append(String.join(", ", outside)).append(" ").append(unit)
+                        .append(outside.size() == 1 ? " lies" : " lie").append(" outside.");
+            }
+        }
+        return why.toString();
     }
 
     private static Optional<ReferenceCandidate> find(List<ReferenceCandidate> candidates, String identifier) {

@@ -138,14 +138,16 @@ class UnitEvaluationTest {
     }
 
     @Test
-    void theHysteresisBudgetIsTheDifferenceOfTwoMeansPlusReferenceAndResolution() {
+    void theHysteresisBudgetIsTheDifferenceOfTwoMeansPlusResolutionTheReferenceCancels() {
         UnitResult result = UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY, complete(H));
         MetricResult hysteresis = metric(result, Metric.HYSTERESIS);
         // FSO = 100 mV -> c = 100/FSO = 1 %FSO per mV; the first largest difference is at 0 bar.
         double uA = D * Math.sqrt(1.0 / 3 + 1.0 / 3);       // pooled s_p = D, 3 UP and 3 DOWN readings
-        double uRef = 0.0005 / 2 * 100 / 10;                 // U(0 bar) = 0.0005 bar, k = 2; c = 100/span
+        // The reference's error at 0 bar is common to the UP and DOWN readings there: it cancels (line of zero).
         double uRes = 0.0005 / Math.sqrt(3) * Math.sqrt(2);  // two readings differenced
-        double uc = Math.sqrt(uA * uA + uRef * uRef + uRes * uRes);
+        double uc = Math.sqrt(uA * uA + uRes * uRes);
+        assertThat(hysteresis.budget().contributions()).anyMatch(c -> c.name().startsWith("reference certificate:")
+                && c.name().contains("cancels in their difference") && c.contribution() == 0.0);
         // s_p is computed from the readings: equal to D up to rounding in the last digits
         assertThat(hysteresis.budget().combinedStandardUncertainty()).isCloseTo(uc, within(1e-13));
         // Only the Type A term has finite nu (24 = 12 groups x 2): nu_eff = u_c^4 / (uA^4 / 24).
@@ -157,6 +159,48 @@ class UnitEvaluationTest {
         // TUR for an upper limit on a non-negative figure: L / (2U), as the procedure derivation plans it.
         assertThat(hysteresis.testUncertaintyRatio().getAsDouble())
                 .isCloseTo(0.1 / (2 * hysteresis.uncertainty().value()), within(1e-12));
+    }
+
+    @Test
+    void theHysteresisUncertaintyDoesNotDependOnWhereTheLargestDifferenceLies() {
+        // Case 1: DOWN readings shifted by H everywhere, the first largest difference is at 0 bar.
+        MetricResult atZero = metric(UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY, complete(H)), Metric.HYSTERESIS);
+        // Case 2: the DOWN readings at 4 and 6 bar shifted by 0.01 mV more (symmetric about x̄ = 5 bar, so the
+        // slope and FSO stay the same), so the first largest difference is at 4 bar, where the reference's U
+        // (0.0005 + 0.0002·4 = 0.0013 bar) is 2.6 times U(0 bar) = 0.0005 bar.
+        UnitMeasurements base = complete(H);
+        List<CalibrationPoint> shifted = base.staticPoints().stream()
+                .map(p -> (p.input() == 4.0 || p.input() == 6.0) && p.direction() == Direction.DOWN
+                        ? new CalibrationPoint(p.input(), p.output() + 0.01, p.direction(), p.cycle()) : p)
+                .toList();
+        UnitMeasurements atFour = new UnitMeasurements(shifted, base.noiseSamples(), base.sweepPoints(), base.context());
+        MetricResult atFourBar = metric(UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY, atFour), Metric.HYSTERESIS);
+        assertThat(atFourBar.note()).contains("at 4 bar");
+        assertThat(atZero.note()).contains("at 0 bar");
+        // The measured hysteresis differs (0.06 against 0.05 mV over FSO), its U does not: the reference
+        // cancels, and the Type A (3 + 3 readings) and resolution lines are alike at both points.
+        assertThat(atFourBar.measured()).isGreaterThan(atZero.measured());
+        assertThat(atFourBar.uncertainty().value()).isCloseTo(atZero.uncertainty().value(),
+                within(1e-12 * atZero.uncertainty().value()));
+        double uA = D * Math.sqrt(1.0 / 3 + 1.0 / 3);
+        double uRes = 0.0005 / Math.sqrt(3) * Math.sqrt(2);
+        assertThat(atFourBar.budget().combinedStandardUncertainty())
+                .isCloseTo(Math.sqrt(uA * uA + uRes * uRes), within(1e-13));
+    }
+
+    @Test
+    void theNonlinearityTakesTheLargestReferenceUncertaintyOverTheSetPoints() {
+        MetricResult nonlinearity = metric(UnitEvaluation.evaluate(SPEC, PROCEDURE, POLICY, complete(H)),
+                Metric.NONLINEARITY);
+        // U(x) = 0.0005 + 0.0002·|x| bar is largest at 10 bar: 0.0025 bar, k = 2; c = 100/span = 10 %FSO/bar,
+        // whichever set point the largest deviation falls on.
+        assertThat(nonlinearity.budget().contributions())
+                .filteredOn(c -> c.name().startsWith("reference PC-7"))
+                .singleElement()
+                .satisfies(c -> {
+                    assertThat(c.name()).contains("at 10 bar").contains("point error");
+                    assertThat(c.contribution()).isCloseTo(0.0025 / 2 * 10, within(1e-15));
+                });
     }
 
     @Test

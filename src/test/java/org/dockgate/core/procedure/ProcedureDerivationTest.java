@@ -146,4 +146,69 @@ class ProcedureDerivationTest {
                 new Sensitivity(0.667, "mV/psi", 1, ToleranceMode.PERCENT), null, null, null, null, null, null, null,
                 null, null, null);
     }
+
+    /** U(x) = max(floor, b·|x|) over a calibrated range [min, max], k = 2: a register band as the core sees it. */
+    static ReferenceCandidate banded(String id, double min, double max, double percent, double floor) {
+        return new ReferenceCandidate(id, TestKind.STATIC_CALIBRATION, min, max,
+                x -> Math.max(floor, Math.abs(x) * percent / 100.0), 2.0);
+    }
+
+    static MetricAcceptance acceptance(ProcedureProposal proposal, Metric metric) {
+        return proposal.acceptance().stream().filter(m -> m.metric() == metric).findFirst().orElseThrow();
+    }
+
+    @Test
+    void anInstrumentCalibratedAboveAPointIsNotPlannedForIt() {
+        // Points 0 … 10 bar; the finer instrument is calibrated over 0.2 … 20 bar only, the other over 0 … 20.
+        ReferenceCandidate fine = banded("RI-FINE", 0.2, 20, 0.005, 0.00001);
+        ReferenceCandidate coarse = banded("RI-COARSE", 0, 20, 0.02, 0.0004);
+        var proposal = ProcedureDerivation.derive(pressure(0.1, 0.05), OPTIONS, List.of(fine, coarse));
+        assertThat(proposal.staticCalibration().referenceInstrument()).isEqualTo("RI-COARSE");
+        assertThat(acceptance(proposal, Metric.SENSITIVITY).referenceInstrument()).isEqualTo("RI-COARSE");
+
+        var none = ProcedureDerivation.derive(pressure(0.1, 0.05), OPTIONS, List.of(fine));
+        assertThat(none.staticCalibration().referenceInstrument()).isNull();
+        assertThat(none.staticCalibration().reasoning()).anyMatch(r -> r.equals("No reference instrument in"
+                + " calibration covers 0 … 10 bar. RI-FINE is calibrated over 0.2 … 20 bar only: 0 bar lies outside."));
+        assertThat(acceptance(none, Metric.SENSITIVITY).plannedExpandedUncertainty()).isEmpty();
+    }
+
+    @Test
+    void theDemoPressureTransducerIsPlannedWithTheFloorAndNoInfiniteRatio() {
+        // The demo's QP-250 (seed-data/sensor-models.json): 0 … 10 bar, 10 mV/bar ± 1 %, zero 0 ± 0.5 mV,
+        // accuracy ± 0.5 %FSO, nonlinearity ≤ 0.25, hysteresis ≤ 0.1, repeatability ≤ 0.05 %FSO; its reference
+        // RI-PRS-01 (seed-data/reference-instruments.csv): 0.01 % of reading, floor 0.0004 bar, 0 … 20 bar, k = 2.
+        var spec = new SensorSpecification(SensorKind.PRESSURE_TRANSDUCER, "bar", 0, 10, "mV",
+                new Sensitivity(10, "mV/bar", 1, ToleranceMode.PERCENT),
+                new SensorSpecification.ZeroOffset(0, 0.5, "mV"), 0.5, 0.25, null, 0.1, 0.05, null, null, null, null);
+        var proposal = ProcedureDerivation.derive(spec, OPTIONS, List.of(banded("RI-PRS-01", 0, 20, 0.01, 0.0004)));
+        // U at the points 0, 2, 4, 6, 8, 10 bar: 0.0004 (floor), 0.0004, 0.0004, 0.0006, 0.0008, 0.001 bar.
+        // Sensitivity, a scale error: U = 10 mV/bar × 0.001/10 = 0.001 mV/bar; TUR = 0.2 / (2 × 0.001) = 100.
+        MetricAcceptance sensitivity = acceptance(proposal, Metric.SENSITIVITY);
+        assertThat(sensitivity.plannedExpandedUncertainty().getAsDouble()).isCloseTo(0.001, within(1e-12));
+        assertThat(sensitivity.testUncertaintyRatio().getAsDouble()).isCloseTo(100, within(1e-6));
+        // Zero offset, a point error at 0 bar: U = 0.0004 bar × 10 mV/bar = 0.004 mV; TUR = 1 / (2 × 0.004) = 125.
+        MetricAcceptance zero = acceptance(proposal, Metric.ZERO_OFFSET);
+        assertThat(zero.plannedExpandedUncertainty().getAsDouble()).isCloseTo(0.004, within(1e-12));
+        assertThat(zero.testUncertaintyRatio().getAsDouble()).isCloseTo(125, within(1e-6));
+        // Accuracy, a point error, the largest U over the points: 0.001 bar / 10 bar × 100 = 0.01 %FSO;
+        // TUR = 1 / (2 × 0.01) = 50. Nonlinearity, the same U; one-sided from 0: TUR = 0.25 / (2 × 0.01) = 12.5.
+        assertThat(acceptance(proposal, Metric.ACCURACY).plannedExpandedUncertainty().getAsDouble())
+                .isCloseTo(0.01, within(1e-12));
+        assertThat(acceptance(proposal, Metric.ACCURACY).testUncertaintyRatio().getAsDouble())
+                .isCloseTo(50, within(1e-6));
+        assertThat(acceptance(proposal, Metric.NONLINEARITY).testUncertaintyRatio().getAsDouble())
+                .isCloseTo(12.5, within(1e-6));
+        // Hysteresis and repeatability: the common error at a set point cancels, so no reference U and no TUR.
+        for (Metric m : List.of(Metric.HYSTERESIS, Metric.REPEATABILITY)) {
+            assertThat(acceptance(proposal, m).plannedExpandedUncertainty()).as(m.name()).isEmpty();
+            assertThat(acceptance(proposal, m).testUncertaintyRatio()).as(m.name()).isEmpty();
+            assertThat(acceptance(proposal, m).reasoning()).contains("cancels");
+        }
+        assertThat(proposal.acceptance()).allSatisfy(a -> {
+            a.plannedExpandedUncertainty().ifPresent(u -> assertThat(u).as(a.metric().name()).isPositive());
+            a.testUncertaintyRatio().ifPresent(t -> assertThat(t).as(a.metric().name()).isFinite());
+        });
+        assertThat(proposal.reasoning()).noneMatch(r -> r.contains("TUR 4:1"));
+    }
 }
