@@ -10,7 +10,6 @@ import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
-import java.util.OptionalDouble;
 import java.util.Set;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
@@ -20,6 +19,8 @@ import org.dockgate.accounts.Person;
 import org.dockgate.bench.BenchService;
 import org.dockgate.catalogue.CatalogueService;
 import org.dockgate.core.evaluation.MetricResult;
+import org.dockgate.core.report.MetricWording;
+import org.dockgate.core.report.ResultFormat;
 import org.dockgate.evaluation.EvaluationService;
 import org.dockgate.evaluation.LotEvaluationView;
 import org.dockgate.evaluation.UnitEvaluationView;
@@ -101,15 +102,13 @@ class LotCertificateTest {
         // 7.8.2.1 m), 7.8.6.1: per unit and metric, the result with its expanded uncertainty U and k, the
         // tolerance, the acceptance limits and the verdict.
         int metrics = 0;
+        var spec = catalogue.revision(lot.specificationRevisionId()).orElseThrow().specification();
         for (UnitEvaluationView unit : ev.units()) {
             assertThat(text).contains("Unit " + unit.serial() + ": PASS");
             for (MetricResult m : unit.result().metrics()) {
-                String metric = m.metric().name().toLowerCase(Locale.ROOT).replace('_', ' ');
-                String row = metric + " " + LotCertificateRenderer.measured(m.measured(), m.uncertainty().value()) + " "
-                        + m.unit() + " " + LotCertificateRenderer.uncertainty(m.uncertainty().value()) + " ("
-                        + String.format(Locale.ROOT, "%.2f", m.uncertainty().coverageFactor()) + ") "
-                        + range(m.tolerance().lower(), m.tolerance().upper()) + " "
-                        + range(m.acceptanceLower(), m.acceptanceUpper()) + " " + m.verdict().name();
+                String metric = MetricWording.name(m, spec);
+                String row = metric + " " + MetricWording.measured(m) + " " + MetricWording.uncertainty(m) + " "
+                        + MetricWording.tolerance(m) + " " + MetricWording.acceptance(m) + " " + m.verdict().name();
                 assertThat(compact).as("unit %s metric %s", unit.serial(), metric).contains(compact(row));
                 metrics++;
             }
@@ -300,18 +299,14 @@ class LotCertificateTest {
         return text.replaceAll("\\s+", "");
     }
 
-    static String range(OptionalDouble lower, OptionalDouble upper) {
-        return (lower.isPresent() ? LotCertificateRenderer.number(lower.getAsDouble()) : "−∞") + " … "
-                + (upper.isPresent() ? LotCertificateRenderer.number(upper.getAsDouble()) : "+∞");
-    }
-
     @Test
     void resultsAreRoundedToTheirUncertainty() {
         // JCGM 100:2008 7.2.6: U to (at most) two significant digits, the result to the same decimal place.
-        assertThat(LotCertificateRenderer.uncertainty(0.0015432)).isEqualTo("0.0015");
-        assertThat(LotCertificateRenderer.measured(10.001234, 0.0015432)).isEqualTo("10.0012");
-        assertThat(LotCertificateRenderer.measured(9.3e-16, 0.00018)).isEqualTo("0");
-        assertThat(LotCertificateRenderer.measured(-0.00001, 0.0018)).isEqualTo("0");
-        assertThat(LotCertificateRenderer.measured(123.456, 2.3)).isEqualTo("123.5");
+        // U rounded up (common practice); more cases in core.report.ResultFormatTest.
+        assertThat(ResultFormat.uncertainty(0.0015432)).isEqualTo("0.0016");
+        assertThat(ResultFormat.value(10.001234, 0.0015432)).isEqualTo("10.0012");
+        assertThat(ResultFormat.value(9.3e-16, 0.00018)).isEqualTo("0.00000");
+        assertThat(ResultFormat.value(-0.00001, 0.0018)).isEqualTo("0.0000");
+        assertThat(ResultFormat.value(123.456, 2.3)).isEqualTo("123.5");
     }
 }
