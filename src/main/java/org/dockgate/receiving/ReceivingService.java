@@ -1,6 +1,7 @@
 package org.dockgate.receiving;
 
 import org.dockgate.platform.CurrentActor;
+import org.dockgate.platform.Role;
 
 import java.security.SecureRandom;
 import java.sql.PreparedStatement;
@@ -43,6 +44,9 @@ import org.springframework.context.ApplicationEventPublisher;
 import org.springframework.jdbc.core.JdbcTemplate;
 import org.springframework.jdbc.support.GeneratedKeyHolder;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
+import org.springframework.security.access.AccessDeniedException;
+import org.springframework.security.core.Authentication;
+import org.springframework.security.core.context.SecurityContextHolder;
 import org.springframework.stereotype.Service;
 import org.springframework.transaction.annotation.Transactional;
 
@@ -176,6 +180,9 @@ public class ReceivingService {
                             FieldChange.of("plan", null, planText(plan)),
                             FieldChange.of("sampleSeed", null, seed),
                             FieldChange.of("sampledSerials", null, String.join(", ", sample)))));
+            // The pair's switching state exists from its first receipt, so a supervisor can decide on reduced
+            // inspection (clause 9.3.3 c) before the first disposition.
+            ensureSwitching(supplier.id(), lot.model().id());
         }
         return receipt(receiptId).orElseThrow();
     }
@@ -410,7 +417,9 @@ public class ReceivingService {
                     + plan.severity().name().toLowerCase() + " plan (" + planText(plan) + "); the switching state has"
                     + " since moved to " + before.severity().name().toLowerCase() + " inspection, so it is unchanged.";
         } else {
-            SwitchingDecision decision = SwitchingRules.next(before, LotResult.of(plan, nonconforming));
+            // The responsible authority's approval in force (clause 9.3.3 c); it also confirms steady production (b).
+            SwitchingDecision decision = SwitchingRules.next(before, LotResult.of(plan, nonconforming)
+                    .withReducedInspectionApproved(reducedApproved(lot.supplierId(), lot.modelId())));
             after = decision.state();
             explanation = decision.explanation();
         }
@@ -498,6 +507,136 @@ public class ReceivingService {
                 + current.partNumber() + " from " + current.supplierCode() + ": " + decision.explanation(), reason.trim())
                 .withChanges(List.of(FieldChange.of("state", label(current.state()), label(after)))));
         return switchingById(switchingId).orElseThrow();
+    }
+
+    // ---- reduced inspection (the responsible authority's decision, ISO 2859-1:1999 clause 9.3.3 c)
+
+    /** The decision in force on reduced inspection for the switching state's pair, and what is still missing. */
+    @Transactional(readOnly = true)
+    public ReducedInspectionStatus reducedInspection(SwitchingView switching) {
+        Optional<ReducedInspectionDecision> latest = reducedDecisions(switching.supplierId(), switching.modelId())
+                .stream().findFirst();
+        boolean approved = latest.map(ReducedInspectionDecision::approved).orElse(false);
+        return new ReducedInspectionStatus(latest, SwitchingRules.reducedReadiness(switching.state(), approved));
+    }
+
+    /** Every decision on reduced inspection for a supplier and model, newest first. */
+    @Transactional(readOnly = true)
+    public List<ReducedInspectionDecision> reducedDecisions(long supplierId, long modelId) {
+        return jdbc.query("select id, supplier_id, model_id, approved, reason, decided_by, decided_at"
+                + " from reduced_inspection_decision where supplier_id = ? and model_id = ? order by id desc",
+                (rs, n) -> new ReducedInspectionDecision(rs.getLong(1), rs.getLong(2), rs.getLong(3), rs.getBoolean(4),
+                        rs.getString(5), rs.getString(6), CurrentActor.instant(rs.getObject(7))), supplierId, modelId);
+    }
+
+    private boolean reducedApproved(long supplierId, long modelId) {
+        return reducedDecisions(supplierId, modelId).stream().findFirst()
+                .map(ReducedInspectionDecision::approved).orElse(false);
+    }
+
+    /**
+     * A SUPERVISOR, as the responsible authority, approves reduced inspection for the switching state's
+     * supplier and model (ISO 2859-1:1999 clause 9.3.3 c) and confirms that production is at a steady
+     * rate (9.3.3 b). The approval stays in force until withdrawn. When the switching score has already
+     * reached 30 on normal inspection, reduced inspection applies from the next lot
+     * ({@link SwitchingRules#approvalGiven}); otherwise the lots to come reach it. Audited as
+     * APPROVE_REDUCED with the reason; a stale version throws {@link ObjectOptimisticLockingFailureException}.
+     *
+     * @throws ReceivingException naming the field when the reason is blank, steady production is not
+     *     confirmed, the state is unknown or an approval is already in force
+     * @throws AccessDeniedException when the signed-in person is not a SUPERVISOR
+     */
+    @Transactional
+    public SwitchingView approveReducedInspection(long switchingId, String reason, boolean productionSteady,
+                                                  long expectedVersion) {
+        SwitchingView current = requireDecisionInput(switchingId, reason, expectedVersion);
+        if (!productionSteady) {
+            throw new ReceivingException("productionSteady", "Reduced inspection also needs production at a steady rate"
+                    + " (ISO 2859-1:1999 clause 9.3.3 b): confirm it, or do not approve yet.");
+        }
+        if (reducedApproved(current.supplierId(), current.modelId())) {
+            throw new ReceivingException(null, "Reduced inspection is already approved for " + current.partNumber()
+                    + " from " + current.supplierCode() + ".");
+        }
+        SwitchingDecision decision = SwitchingRules.approvalGiven(current.state(), true);
+        return recordReducedDecision(current, true, reason.trim(), decision, expectedVersion);
+    }
+
+    /**
+     * A SUPERVISOR withdraws the approval of reduced inspection, with the reason. On reduced inspection,
+     * normal inspection is reinstated from the next lot because other conditions warrant it (ISO
+     * 2859-1:1999 clause 9.3.4 b or c: irregular production or the authority's own judgement); on other
+     * severities the state is unchanged and normal inspection no longer switches to reduced. Audited as
+     * WITHDRAW_REDUCED with the reason.
+     *
+     * @throws ReceivingException naming the field when the reason is blank, the state is unknown or no
+     *     approval is in force
+     * @throws AccessDeniedException when the signed-in person is not a SUPERVISOR
+     */
+    @Transactional
+    public SwitchingView withdrawReducedInspection(long switchingId, String reason, long expectedVersion) {
+        SwitchingView current = requireDecisionInput(switchingId, reason, expectedVersion);
+        if (!reducedApproved(current.supplierId(), current.modelId())) {
+            throw new ReceivingException(null, "Reduced inspection is not approved for " + current.partNumber()
+                    + " from " + current.supplierCode() + "; there is nothing to withdraw.");
+        }
+        SwitchingState state = current.state();
+        SwitchingDecision decision = !state.discontinued() && state.severity() == Severity.REDUCED
+                ? SwitchingRules.reinstateNormal(state, "approval of reduced inspection withdrawn: " + reason.trim())
+                : new SwitchingDecision(state, state, "Approval of reduced inspection withdrawn; "
+                        + current.label().toLowerCase() + " inspection continues and normal inspection will not switch"
+                        + " to reduced (ISO 2859-1:1999 clause 9.3.3 c).");
+        return recordReducedDecision(current, false, reason.trim(), decision, expectedVersion);
+    }
+
+    private SwitchingView requireDecisionInput(long switchingId, String reason, long expectedVersion) {
+        // Checked here too, not only by the URL rule: the decision is the responsible authority's (9.3.3 c).
+        Authentication auth = SecurityContextHolder.getContext().getAuthentication();
+        if (auth == null || auth.getAuthorities().stream().noneMatch(a -> Role.SUPERVISOR.authority().equals(a.getAuthority()))) {
+            throw new AccessDeniedException("Only a SUPERVISOR, as the responsible authority, decides on reduced"
+                    + " inspection.");
+        }
+        SwitchingView current = switchingById(switchingId)
+                .orElseThrow(() -> new ReceivingException(null, "There is no switching state " + switchingId + "."));
+        if (reason == null || reason.isBlank()) {
+            throw new ReceivingException("reason", "Give the reason for the decision on reduced inspection.");
+        }
+        if (reason.trim().length() > 2000) {
+            throw new ReceivingException("reason", "The reason is longer than 2000 characters.");
+        }
+        if (current.version() != expectedVersion) {
+            throw new ObjectOptimisticLockingFailureException("Switching state", switchingId);
+        }
+        return current;
+    }
+
+    private SwitchingView recordReducedDecision(SwitchingView current, boolean approved, String reason,
+                                                SwitchingDecision decision, long expectedVersion) {
+        var now = OffsetDateTime.now(clock).withOffsetSameInstant(ZoneOffset.UTC);
+        SwitchingState after = decision.state();
+        int updated = jdbc.update("update switching_state set scheme = ?, severity = ?, discontinued = ?, recent_normal = ?,"
+                + " switching_score = ?, consecutive_accepted_normal = ?, consecutive_accepted_tightened = ?,"
+                + " not_accepted_tightened = ?, last_explanation = ?, version = version + 1, updated_at = ?"
+                + " where id = ? and version = ?", after.scheme().name(), after.severity().name(), after.discontinued(),
+                window(after.recentNormalLotsAccepted()), after.switchingScore(), after.consecutiveAcceptedOnNormal(),
+                after.consecutiveAcceptedOnTightened(), after.notAcceptedOnTightened(), decision.explanation(), now,
+                current.id(), expectedVersion);
+        if (updated == 0) {
+            throw new ObjectOptimisticLockingFailureException("Switching state", current.id());
+        }
+        jdbc.update("insert into reduced_inspection_decision (supplier_id, model_id, approved, reason, decided_by,"
+                + " decided_at) values (?, ?, ?, ?, ?, ?)", current.supplierId(), current.modelId(), approved, reason,
+                CurrentActor.username(), now);
+        List<FieldChange> changes = new ArrayList<>();
+        changes.add(FieldChange.of("reducedInspectionApproved", !approved, approved));
+        if (decision.transition()) {
+            changes.add(FieldChange.of("state", label(current.state()), label(after)));
+        }
+        events.publishEvent(AuditEvent.withReason("SWITCHING", current.id(), approved ? "APPROVE_REDUCED"
+                : "WITHDRAW_REDUCED", (approved ? "Reduced inspection approved" : "Approval of reduced inspection"
+                + " withdrawn") + " for " + current.partNumber() + " from " + current.supplierCode() + ": "
+                + decision.explanation(), reason).withChanges(changes));
+        return switchingById(current.id()).orElseThrow();
     }
 
     private SwitchingView ensureSwitching(long supplierId, long modelId) {

@@ -244,4 +244,105 @@ class ReceivingServiceTest {
                 .isEqualTo("Supplier 8D report accepted");
         assertThat(receive(pair, ReceivingTestSupport.serials("Y", 50)).plan().severity()).isEqualTo(Severity.TIGHTENED);
     }
+
+    /** Ten lots of 50 at AQL 10, level II: code letter D, n 8, Ac 2, Re 3 (ISO 2859-1:1999 Table 2-A). */
+    private List<LotView> tenAcceptedLots(Pair pair, String prefix, LotView first) {
+        List<LotView> lots = new ArrayList<>();
+        for (int i = 0; i < 10; i++) {
+            LotView lot = i == 0 && first != null ? first : receive(pair, ReceivingTestSupport.serials(prefix + i + "-", 50));
+            assertThat(lot.plan().severity()).isEqualTo(Severity.NORMAL);
+            assertThat(lot.plan().acceptNumber()).isEqualTo(2);
+            // d = 0 is also accepted at AQL 6.5 (D, n 8, Ac 1): +3 to the switching score (clause 9.3.3.2 a 1)
+            receiving.recordLotResult(lot.id(), 0);
+            lots.add(lot);
+        }
+        return lots;
+    }
+
+    @Test
+    @WithMockUser(username = "supervisor", roles = "SUPERVISOR")
+    void withReducedApprovedTenAcceptedLotsReachingTheScoreMoveToReduced() {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_10, SupplierStatus.APPROVED);
+        LotView first = receive(pair, ReceivingTestSupport.serials("F", 50));
+        SwitchingView start = receiving.switching(pair.supplier().id(), pair.model().id()).orElseThrow();
+        assertThat(receiving.reducedInspection(start).readiness().missing())
+                .anyMatch(m -> m.contains("switching score 0 of 30")).anyMatch(m -> m.contains("approval"));
+        assertThatThrownBy(() -> receiving.approveReducedInspection(start.id(), "Supplier audit passed", false,
+                start.version())).isInstanceOf(ReceivingException.class)
+                .satisfies(e -> assertThat(((ReceivingException) e).field()).isEqualTo("productionSteady"));
+        assertThatThrownBy(() -> receiving.approveReducedInspection(start.id(), " ", true, start.version()))
+                .isInstanceOf(ReceivingException.class).hasMessageContaining("reason");
+        SwitchingView approved = receiving.approveReducedInspection(start.id(), "Supplier audit passed", true,
+                start.version());
+        // ISO 2859-1:1999 clause 9.3.3 a): the approval alone does not switch while the score is below 30
+        assertThat(approved.state().severity()).isEqualTo(Severity.NORMAL);
+        assertThat(receiving.reducedInspection(approved).readiness().missing())
+                .containsExactly("switching score 0 of 30 (ISO 2859-1:1999 clause 9.3.3 a)");
+        List<LotView> lots = tenAcceptedLots(pair, "A", first);
+        SwitchingView after = receiving.switching(pair.supplier().id(), pair.model().id()).orElseThrow();
+        // ISO 2859-1:1999 clause 9.3.3: the score reached 30 at the tenth lot, with approval and steady
+        // production -> reduced from the next lot
+        assertThat(after.state().severity()).isEqualTo(Severity.REDUCED);
+        assertThat(after.lastExplanation()).contains("reduced inspection from the next lot (ISO 2859-1:1999 clause 9.3.3)");
+        assertThat(receiving.reducedInspection(after).readiness().onReduced()).isTrue();
+        LotView next = receive(pair, ReceivingTestSupport.serials("N", 50));
+        // ISO 2859-1:1999 Table 2-C, code letter D, AQL 10: n 3, Ac 1, Re 2 (SAMPLING.md section 6.4 generator)
+        assertThat(next.plan().plan())
+                .isEqualTo(SingleSamplingPlans.plan(50, Aql.AQL_10, InspectionLevel.II, Severity.REDUCED));
+        assertThat(lots).hasSize(10);
+        assertThat(jdbc.queryForObject("select reason from audit_entry where entity_type = 'SWITCHING' and entity_id = ?"
+                + " and action = 'APPROVE_REDUCED'", String.class, String.valueOf(start.id())))
+                .isEqualTo("Supplier audit passed");
+
+        // Withdrawing on reduced reinstates normal from the next lot (clause 9.3.4 c), a new row beside the approval.
+        SwitchingView withdrawn = receiving.withdrawReducedInspection(after.id(), "Production moved to a new line",
+                after.version());
+        assertThat(withdrawn.state().severity()).isEqualTo(Severity.NORMAL);
+        assertThat(withdrawn.lastExplanation()).contains("9.3.4");
+        assertThat(receiving.reducedDecisions(pair.supplier().id(), pair.model().id()))
+                .extracting(ReducedInspectionDecision::approved).containsExactly(false, true);
+        assertThat(jdbc.queryForObject("select count(*) from audit_entry where entity_type = 'SWITCHING' and entity_id = ?"
+                + " and action = 'WITHDRAW_REDUCED' and reason = 'Production moved to a new line'", Integer.class,
+                String.valueOf(start.id()))).isEqualTo(1);
+    }
+
+    @Test
+    @WithMockUser(username = "supervisor", roles = "SUPERVISOR")
+    void withoutApprovalTenAcceptedLotsStayOnNormalUntilTheApprovalIsGiven() {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_10, SupplierStatus.APPROVED);
+        tenAcceptedLots(pair, "B", null);
+        SwitchingView after = receiving.switching(pair.supplier().id(), pair.model().id()).orElseThrow();
+        // ISO 2859-1:1999 clause 9.3.3 c): score 30, but without the responsible authority's approval
+        assertThat(after.state().switchingScore()).isEqualTo(30);
+        assertThat(after.state().severity()).isEqualTo(Severity.NORMAL);
+        assertThat(after.lastExplanation()).contains("also needs the responsible authority's approval");
+        assertThat(receiving.reducedInspection(after).readiness().missing()).singleElement()
+                .satisfies(m -> assertThat(m).contains("approval").contains("9.3.3 b and c"));
+        // The approval given now, with the score already at 30, switches from the next lot.
+        SwitchingView approved = receiving.approveReducedInspection(after.id(), "Ten clean lots", true, after.version());
+        assertThat(approved.state().severity()).isEqualTo(Severity.REDUCED);
+        assertThatThrownBy(() -> receiving.approveReducedInspection(after.id(), "again", true, approved.version()))
+                .isInstanceOf(ReceivingException.class).hasMessageContaining("already approved");
+        assertThatThrownBy(() -> receiving.withdrawReducedInspection(after.id(), "stale", after.version()))
+                .isInstanceOf(ObjectOptimisticLockingFailureException.class);
+    }
+
+    @Test
+    void onlyASupervisorDecidesOnReducedInspectionAndDecisionsAreAppendOnly() {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_10, SupplierStatus.APPROVED);
+        receive(pair, ReceivingTestSupport.serials("O", 50));
+        SwitchingView state = receiving.switching(pair.supplier().id(), pair.model().id()).orElseThrow();
+        int decisions = count("reduced_inspection_decision");
+        // signed in as an OPERATOR (class default)
+        assertThatThrownBy(() -> receiving.approveReducedInspection(state.id(), "x", true, state.version()))
+                .isInstanceOf(org.springframework.security.access.AccessDeniedException.class);
+        assertThat(count("reduced_inspection_decision")).isEqualTo(decisions);
+        jdbc.update("insert into reduced_inspection_decision (supplier_id, model_id, approved, reason, decided_by,"
+                + " decided_at) values (?, ?, true, 'test row', 'supervisor', current_timestamp)",
+                pair.supplier().id(), pair.model().id());
+        assertThatThrownBy(() -> jdbc.update("update reduced_inspection_decision set approved = false where supplier_id = ?",
+                pair.supplier().id())).hasMessageContaining("append-only");
+        assertThatThrownBy(() -> jdbc.update("delete from reduced_inspection_decision where supplier_id = ?",
+                pair.supplier().id())).hasMessageContaining("append-only");
+    }
 }

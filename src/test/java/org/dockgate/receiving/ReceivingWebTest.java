@@ -1,5 +1,6 @@
 package org.dockgate.receiving;
 
+import static org.assertj.core.api.Assertions.assertThat;
 import static org.hamcrest.Matchers.containsString;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
@@ -38,6 +39,7 @@ class ReceivingWebTest {
     @Autowired MockMvc mvc;
     @Autowired CatalogueService catalogue;
     @Autowired TestProcedures procedures;
+    @Autowired ReceivingService receiving;
 
     private String body(Pair pair, int quantity, String serials) {
         return "{\"purchaseOrder\":\"PO-W\",\"deliveryNote\":\"DN-W\",\"receivedOn\":\"2026-01-05\",\"supplierId\":"
@@ -111,5 +113,36 @@ class ReceivingWebTest {
         mvc.perform(post("/api/v1/receipts").with(csrf()).contentType(MediaType.APPLICATION_JSON).content("{\"lots\":"))
                 .andExpect(status().isBadRequest())
                 .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON));
+    }
+
+    @Test
+    void onlyASupervisorApprovesReducedInspectionAndThePageShowsWhatIsMissing() throws Exception {
+        Pair pair = ReceivingTestSupport.pair(catalogue, procedures, Aql.AQL_6_5, SupplierStatus.APPROVED);
+        mvc.perform(post("/api/v1/receipts").with(user("operator").roles("OPERATOR")).with(csrf())
+                .contentType(MediaType.APPLICATION_JSON).content(body(pair, 2, "[\"V1\",\"V2\"]")))
+                .andExpect(status().isCreated());
+        long id = receiving.switching(pair.supplier().id(), pair.model().id()).orElseThrow().id();
+        for (String role : new String[] {"OPERATOR", "ENGINEER", "AUDITOR", "ADMIN"}) {
+            mvc.perform(post("/receiving/switching/" + id + "/reduced/approve").with(user(role.toLowerCase()).roles(role))
+                    .with(csrf()).param("reason", "x").param("productionSteady", "true").param("version", "0"))
+                    .andExpect(status().isForbidden());
+            mvc.perform(post("/receiving/switching/" + id + "/reduced/withdraw").with(user(role.toLowerCase()).roles(role))
+                    .with(csrf()).param("reason", "x").param("version", "0")).andExpect(status().isForbidden());
+        }
+        assertThat(receiving.reducedDecisions(pair.supplier().id(), pair.model().id())).isEmpty();
+        mvc.perform(get("/receiving/switching").with(user("supervisor").roles("SUPERVISOR")))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString("switching score 0 of 30 (ISO 2859-1:1999 clause 9.3.3 a)")))
+                .andExpect(content().string(containsString("/receiving/switching/" + id + "/reduced/approve")));
+        long version = receiving.switchingById(id).orElseThrow().version();
+        mvc.perform(post("/receiving/switching/" + id + "/reduced/approve").with(user("supervisor").roles("SUPERVISOR"))
+                .with(csrf()).param("reason", "Supplier audit passed").param("productionSteady", "true")
+                .param("version", String.valueOf(version))).andExpect(status().is3xxRedirection());
+        assertThat(receiving.reducedDecisions(pair.supplier().id(), pair.model().id())).singleElement()
+                .satisfies(d -> assertThat(d.decidedBy()).isEqualTo("supervisor"));
+        mvc.perform(get("/receiving/switching").with(user("auditor").roles("AUDITOR")))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString("Approved by supervisor")))
+                .andExpect(content().string(org.hamcrest.Matchers.not(containsString("/reduced/withdraw"))));
     }
 }

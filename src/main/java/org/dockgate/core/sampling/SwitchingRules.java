@@ -131,6 +131,93 @@ public final class SwitchingRules {
                 + clause(state, Rule.REDUCED_TO_NORMAL) + ", other conditions). Reason: " + reason.trim());
     }
 
+    /**
+     * Applies the responsible authority's approval of reduced inspection at the moment it is given: when
+     * the state is on normal inspection and the other conditions of clause 9.3.3 already hold (switching
+     * score at least 30 under ISO 2859-1:1999, 9.3.3 a; under ANSI/ASQ Z1.4-2008 the preceding 10 lots
+     * accepted on normal inspection, 8.3.3 a) and production is at a steady rate (9.3.3 b), reduced
+     * inspection applies from the next lot; otherwise the state is unchanged and the explanation names
+     * what is still missing. The clause states conditions on the state, not on a lot, so an approval given
+     * after the score was reached need not wait for another lot.
+     *
+     * @param state the current state
+     * @param productionSteady whether production is at a steady rate (clause 9.3.3 b)
+     * @return the next state and an explanation
+     * @throws NullPointerException when {@code state} is null
+     */
+    public static SwitchingDecision approvalGiven(SwitchingState state, boolean productionSteady) {
+        Objects.requireNonNull(state, "state");
+        ReducedInspectionReadiness readiness = readiness(state, true, productionSteady);
+        if (readiness.onReduced()) {
+            return new SwitchingDecision(state, state, "Reduced inspection approved; inspection is already reduced.");
+        }
+        if (readiness.ready()) {
+            return new SwitchingDecision(state, SwitchingState.start(state.scheme(), Severity.REDUCED),
+                    "Reduced inspection approved by the responsible authority; "
+                            + (state.scheme() == Scheme.ISO_2859_1_1999 ? "switching score " + state.switchingScore()
+                            + " >= 30" : state.consecutiveAcceptedOnNormal() + " consecutive lots accepted on normal"
+                            + " inspection") + " and production steady: reduced inspection from the next lot ("
+                            + clause(state, Rule.NORMAL_TO_REDUCED) + ").");
+        }
+        return new SwitchingDecision(state, state, "Reduced inspection approved by the responsible authority; it"
+                + " still needs " + String.join("; ", readiness.missing()) + ".");
+    }
+
+    /**
+     * What is still missing for reduced inspection (clause 9.3.3 a–c; ANSI/ASQ Z1.4-2008 8.3.3 a, c, d;
+     * the Table VIII limit numbers of 8.3.3 b are not applied, see the class comment): inspection must be
+     * on normal (not discontinued, not tightened: tightened returns to normal after 5 consecutive accepted
+     * lots, 9.3.2), the switching score at least 30 (ISO) or the preceding 10 lots accepted (Z1.4),
+     * production steady and the responsible authority's approval.
+     *
+     * @param state the current state
+     * @param approved whether the responsible authority considers reduced inspection desirable
+     * @return the readiness; {@code onReduced} when already on reduced inspection
+     * @throws NullPointerException when {@code state} is null
+     */
+    public static ReducedInspectionReadiness reducedReadiness(SwitchingState state, boolean approved) {
+        Objects.requireNonNull(state, "state");
+        return readiness(state, approved, approved);
+    }
+
+    private static ReducedInspectionReadiness readiness(SwitchingState state, boolean approved, boolean steady) {
+        if (!state.discontinued() && state.severity() == Severity.REDUCED) {
+            return new ReducedInspectionReadiness(true, List.of());
+        }
+        List<String> missing = new ArrayList<>();
+        if (state.discontinued()) {
+            missing.add("inspection resumed (discontinued, " + clause(state, Rule.DISCONTINUE) + "), then 5 consecutive"
+                    + " lots accepted on tightened inspection to return to normal (" + clause(state, Rule.TIGHTENED_TO_NORMAL)
+                    + ")");
+        } else if (state.severity() == Severity.TIGHTENED) {
+            missing.add("normal inspection first: " + state.consecutiveAcceptedOnTightened() + " of 5 consecutive lots"
+                    + " accepted on tightened inspection (" + clause(state, Rule.TIGHTENED_TO_NORMAL) + ")");
+        }
+        boolean onNormal = !state.discontinued() && state.severity() == Severity.NORMAL;
+        boolean iso = state.scheme() == Scheme.ISO_2859_1_1999;
+        if (iso) {
+            int score = onNormal ? state.switchingScore() : 0;
+            if (score < REDUCED_SCORE) {
+                missing.add("switching score " + score + " of " + REDUCED_SCORE + " (" + clause(state, Rule.NORMAL_TO_REDUCED)
+                        + " a)");
+            }
+        } else {
+            int lots = onNormal ? state.consecutiveAcceptedOnNormal() : 0;
+            if (lots < Z14_REDUCED_LOTS) {
+                missing.add(lots + " of " + Z14_REDUCED_LOTS + " preceding lots accepted on normal inspection ("
+                        + clause(state, Rule.NORMAL_TO_REDUCED) + " a)");
+            }
+        }
+        if (!steady && approved) {
+            missing.add("steady production (" + clause(state, Rule.NORMAL_TO_REDUCED) + (iso ? " b)" : " c)"));
+        }
+        if (!approved) {
+            missing.add("the responsible authority's approval of reduced inspection, which also confirms steady"
+                    + " production (" + clause(state, Rule.NORMAL_TO_REDUCED) + (iso ? " b and c)" : " c and d)"));
+        }
+        return new ReducedInspectionReadiness(false, missing);
+    }
+
     private static SwitchingDecision onNormal(SwitchingState state, LotResult lot) {
         boolean accepted = lot.accepted();
         StringBuilder text = new StringBuilder(lotSentence(lot, "normal"));

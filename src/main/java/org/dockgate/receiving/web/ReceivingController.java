@@ -2,7 +2,10 @@ package org.dockgate.receiving.web;
 
 import java.time.Clock;
 import java.time.LocalDate;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.function.Supplier;
 import java.util.UUID;
 import org.dockgate.catalogue.CatalogueService;
 import org.dockgate.catalogue.SupplierStatus;
@@ -13,6 +16,8 @@ import org.dockgate.receiving.NewReceipt;
 import org.dockgate.receiving.ReceiptView;
 import org.dockgate.receiving.ReceivingException;
 import org.dockgate.receiving.ReceivingService;
+import org.dockgate.receiving.ReducedInspectionStatus;
+import org.dockgate.receiving.SwitchingView;
 import org.dockgate.receiving.SerialList;
 import org.springframework.http.HttpStatus;
 import org.springframework.orm.ObjectOptimisticLockingFailureException;
@@ -95,8 +100,46 @@ class ReceivingController {
 
     @GetMapping("/switching")
     String switching(Model model) {
-        model.addAttribute("states", receiving.switchingStates());
+        List<SwitchingView> states = receiving.switchingStates();
+        Map<Long, ReducedInspectionStatus> reduced = new HashMap<>();
+        states.forEach(s -> reduced.put(s.id(), receiving.reducedInspection(s)));
+        model.addAttribute("states", states);
+        model.addAttribute("reduced", reduced);
         return "receiving/switching";
+    }
+
+    /** A SUPERVISOR approves reduced inspection (ISO 2859-1:1999 clause 9.3.3 b and c) with a reason. */
+    @PostMapping("/switching/{id}/reduced/approve")
+    String approveReduced(@PathVariable long id, @RequestParam(defaultValue = "") String reason,
+                          @RequestParam(defaultValue = "false") boolean productionSteady, @RequestParam long version,
+                          RedirectAttributes redirect) {
+        return decideReduced(redirect, () -> {
+            var s = receiving.approveReducedInspection(id, reason, productionSteady, version);
+            return "Reduced inspection approved: " + s.partNumber() + " from " + s.supplierCode() + ". "
+                    + s.lastExplanation();
+        });
+    }
+
+    /** A SUPERVISOR withdraws the approval of reduced inspection with a reason (clause 9.3.4). */
+    @PostMapping("/switching/{id}/reduced/withdraw")
+    String withdrawReduced(@PathVariable long id, @RequestParam(defaultValue = "") String reason,
+                           @RequestParam long version, RedirectAttributes redirect) {
+        return decideReduced(redirect, () -> {
+            var s = receiving.withdrawReducedInspection(id, reason, version);
+            return "Approval of reduced inspection withdrawn: " + s.partNumber() + " from " + s.supplierCode() + ". "
+                    + s.lastExplanation();
+        });
+    }
+
+    private String decideReduced(RedirectAttributes redirect, Supplier<String> decision) {
+        try {
+            redirect.addFlashAttribute("notice", decision.get());
+        } catch (ReceivingException e) {
+            redirect.addFlashAttribute("problem", e.getMessage());
+        } catch (ObjectOptimisticLockingFailureException e) {
+            redirect.addFlashAttribute("problem", "This changed while you were editing; look again and retry.");
+        }
+        return "redirect:/receiving/switching";
     }
 
     @PostMapping("/switching/{id}/lift")

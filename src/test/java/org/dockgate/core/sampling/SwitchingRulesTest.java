@@ -299,4 +299,40 @@ class SwitchingRulesTest {
         assertThrows(IllegalArgumentException.class,
                 () -> new SwitchingState(ISO, Severity.NORMAL, false, List.of(), -1, 0, 0, 0));
     }
+
+    @Test
+    void readinessNamesWhatIsStillMissingForReduced() {
+        // ISO 2859-1:1999 clause 9.3.3 a) to c)
+        SwitchingState six = last(feedAll(SwitchingState.start(), 0, 0));
+        assertEquals(List.of("switching score 6 of 30 (ISO 2859-1:1999 clause 9.3.3 a)",
+                "the responsible authority's approval of reduced inspection, which also confirms steady production"
+                        + " (ISO 2859-1:1999 clause 9.3.3 b and c)"),
+                SwitchingRules.reducedReadiness(six, false).missing());
+        assertEquals(List.of("switching score 6 of 30 (ISO 2859-1:1999 clause 9.3.3 a)"),
+                SwitchingRules.reducedReadiness(six, true).missing());
+        // tightened must first return to normal (clause 9.3.2), where the score starts at 0 (9.3.3.2)
+        SwitchingState tightened = SwitchingState.start(ISO, Severity.TIGHTENED);
+        List<String> missing = SwitchingRules.reducedReadiness(tightened, true).missing();
+        assertTrue(missing.get(0).contains("0 of 5 consecutive lots accepted on tightened"), missing.toString());
+        assertTrue(missing.get(1).contains("switching score 0 of 30"), missing.toString());
+        assertTrue(SwitchingRules.reducedReadiness(SwitchingState.start(ISO, Severity.REDUCED), false).onReduced());
+        // ANSI/ASQ Z1.4-2008 clause 8.3.3 a) counts the preceding lots instead of a score
+        assertTrue(SwitchingRules.reducedReadiness(SwitchingState.start(Z14, Severity.NORMAL), true).missing().get(0)
+                .startsWith("0 of 10 preceding lots accepted"));
+    }
+
+    @Test
+    void anApprovalGivenAfterTheScoreReachedThirtySwitchesFromTheNextLot() {
+        // ISO 2859-1:1999 clause 9.3.3: all three conditions hold once the approval is given
+        SwitchingState thirty = last(feedAll(SwitchingState.start(), 0, 0, 0, 0, 0, 0, 0, 0, 0, 0));
+        SwitchingDecision approved = SwitchingRules.approvalGiven(thirty, true);
+        assertEquals(SwitchingState.start(ISO, Severity.REDUCED), approved.state());
+        assertTrue(approved.explanation().contains("clause 9.3.3"), approved.explanation());
+        SwitchingDecision irregular = SwitchingRules.approvalGiven(thirty, false);
+        assertEquals(thirty, irregular.state());
+        assertTrue(irregular.explanation().contains("steady production (ISO 2859-1:1999 clause 9.3.3 b)"),
+                irregular.explanation());
+        SwitchingState six = last(feedAll(SwitchingState.start(), 0, 0));
+        assertEquals(six, SwitchingRules.approvalGiven(six, true).state());
+    }
 }
