@@ -52,7 +52,9 @@ class DemoInstruments implements DemoStep {
                     bands(row.get("segments"), Double.parseDouble(row.get("expandedUncertainty")),
                             UncertaintyMode.valueOf(row.get("uncertaintyMode")), max));
             NewInstrument instrument = new NewInstrument(row.get("identifier"), row.get("description"),
-                    row.get("quantity"), Double.parseDouble(row.get("rangeMin")), max, row.get("unit"), calibration);
+                    row.get("quantity"), Double.parseDouble(row.get("rangeMin")), max, row.get("unit"), calibration,
+                    row.get("resolution") == null || row.get("resolution").isBlank() ? null
+                            : Double.parseDouble(row.get("resolution")));
             DemoLoader.as("admin", () -> instruments.create(instrument));
         }
     }

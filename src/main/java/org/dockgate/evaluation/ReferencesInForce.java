@@ -56,7 +56,7 @@ final class ReferencesInForce {
                         + " the reading with an instrument that was in calibration.");
                 continue;
             }
-            uses.add(new Use(instrument.get(), record.get(), r.point()));
+            uses.add(new Use(instrument.get(), record.get(), r.applied()));
         }
         if (uses.isEmpty()) {
             return Optional.empty();

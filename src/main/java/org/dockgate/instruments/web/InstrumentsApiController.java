@@ -108,7 +108,9 @@ class InstrumentsApiController {
             @Schema(description = "Coverage factor k", example = "2") Double coverageFactor,
             @Schema(example = "0.015") Double expandedUncertainty,
             @Schema(example = "PERCENT_OF_READING") UncertaintyMode uncertaintyMode,
-            List<BandDto> bands) {
+            List<BandDto> bands,
+            @Schema(description = "For a readout (multimeter, DAQ, bridge): its resolution in the range unit, the"
+                    + " digit of the range used; optional", example = "0.000001") Double resolution) {
     }
 
     @Schema(description = "A new calibration (new certificate) of an instrument; earlier records are kept."
@@ -144,13 +146,16 @@ class InstrumentsApiController {
                               @Schema(description = "The due date, when EXPIRED; else null") LocalDate expiredSince,
                               @Schema(description = "May be chosen for a test today (not EXPIRED)") boolean selectable,
                               LocalDate asOf, long version, CalibrationResponse current,
-                              List<CalibrationResponse> calibrations) {
+                              List<CalibrationResponse> calibrations,
+                              @Schema(description = "A readout's resolution in the range unit; null when not recorded")
+                              Double resolution) {
         static InstrumentResponse of(InstrumentView v) {
             return new InstrumentResponse(v.identifier(), v.description(), v.quantity(),
                     ApiNumbers.finiteOrNull(v.rangeMin()), ApiNumbers.finiteOrNull(v.rangeMax()), v.unit(),
                     v.status(), v.dueSoon(), v.daysUntilDue(), v.expiredSince().orElse(null), v.selectable(),
                     v.asOf(), v.version(), CalibrationResponse.of(v.current()),
-                    v.calibrations().stream().map(CalibrationResponse::of).toList());
+                    v.calibrations().stream().map(CalibrationResponse::of).toList(),
+                    v.resolution().isPresent() ? v.resolution().getAsDouble() : null);
         }
     }
 
@@ -197,7 +202,7 @@ class InstrumentsApiController {
                 request.dueOn(), request.coverageFactor(), request.expandedUncertainty(), request.uncertaintyMode(),
                 request.bands(), max);
         InstrumentView created = instruments.create(new NewInstrument(request.identifier(), request.description(),
-                request.quantity(), min, max, request.unit(), calibration));
+                request.quantity(), min, max, request.unit(), calibration, request.resolution()));
         return ResponseEntity.created(URI.create("/api/v1/reference-instruments/" + created.identifier()))
                 .body(InstrumentResponse.of(created));
     }
