@@ -13,6 +13,9 @@
   }
   const inputs = Array.from(page.querySelectorAll('input.reading-input'));
   const instrument = document.getElementById('instrument');
+  const readout = document.getElementById('readout');
+  const excitation = document.getElementById('excitation');
+  function appliedOf(input) { return input.dataset.applied ? document.getElementById(input.dataset.applied) : null; }
 
   function statusOf(input) { return document.getElementById(input.id + '-status'); }
 
@@ -35,7 +38,9 @@
       serial: page.dataset.serial, test: input.dataset.test, point: Number(input.dataset.point),
       direction: input.dataset.direction || null,
       cycle: input.dataset.cycle === '' || input.dataset.cycle === undefined ? null : Number(input.dataset.cycle),
-      text: text, instrument: instrument ? instrument.value : null, clientToken: input.dataset.token
+      text: text, instrument: instrument ? instrument.value : null, clientToken: input.dataset.token,
+      applied: appliedOf(input) ? appliedOf(input).value.trim() : null,
+      readout: readout ? readout.value : null, excitation: excitation ? excitation.value : null
     };
     try {
       const response = await fetch(page.dataset.autosave, { method: 'POST', headers: headers(true), body: JSON.stringify(body),
@@ -44,6 +49,7 @@
         const saved = await response.json();
         input.readOnly = true;
         input.value = saved.value + ' ' + saved.unit;
+        if (appliedOf(input)) { appliedOf(input).readOnly = true; appliedOf(input).value = saved.applied; }
         input.classList.remove('invalid');
         input.removeAttribute('aria-invalid');
         status.textContent = 'saved ✓';
@@ -62,6 +68,17 @@
       input.dataset.saving = 'false';
     }
   }
+
+  // Enter in an applied-value field moves on to its reading (saving happens with the reading).
+  inputs.forEach(input => {
+    const applied = appliedOf(input);
+    if (!applied) { return; }
+    applied.addEventListener('keydown', event => {
+      if (event.key !== 'Enter') { return; }
+      event.preventDefault();
+      input.focus();
+    });
+  });
 
   inputs.forEach(input => {
     input.addEventListener('keydown', async event => {

@@ -23,11 +23,12 @@ import org.dockgate.core.series.Direction;
  * @param suggestedInstrument the instrument the procedure names for the static test, if any
  * @param keyed               the static and sweep readings, in order (entered by keyboard or file)
  * @param noiseSamples        how many noise samples (slots after the keyed ones), 0 when there is no noise capture
+ * @param appliedWindow       how far (±, input unit) a static reading's applied value may lie from its set point
  */
 public record BenchPlan(long procedureRevisionId, String procedureLabel, String inputUnit, String outputUnit,
                         String quantity, double rangeMin, double rangeMax, String suggestedInstrument,
                         List<ExpectedReading> keyed, int noiseSamples, List<Double> staticPoints,
-                        List<Direction> directions, int cycles, List<Double> frequenciesHz) {
+                        List<Direction> directions, int cycles, List<Double> frequenciesHz, double appliedWindow) {
 
     /**
      * Points closer than this fraction of the static span (or of the frequency) to a procedure point are
@@ -51,10 +52,12 @@ public record BenchPlan(long procedureRevisionId, String procedureLabel, String 
      * @param content             the approved content
      * @param outputUnit          the specification's output unit
      * @param quantity            the input quantity for instruments, or null
+     * @param appliedWindow       the window for applied values (± input unit), see
+     *                            {@link ProcedureProposal.StaticCalibration#appliedWindowFor}
      * @return the plan
      */
     public static BenchPlan of(long procedureRevisionId, String label, ProcedureProposal content, String outputUnit,
-                               String quantity) {
+                               String quantity, double appliedWindow) {
         List<ExpectedReading> keyed = new ArrayList<>();
         ProcedureProposal.StaticCalibration sc = content.staticCalibration();
         List<Double> points = sc == null ? List.of() : sc.pointsInput();
@@ -78,7 +81,8 @@ public record BenchPlan(long procedureRevisionId, String procedureLabel, String 
         double min = points.stream().mapToDouble(Double::doubleValue).min().orElse(0);
         double max = points.stream().mapToDouble(Double::doubleValue).max().orElse(0);
         return new BenchPlan(procedureRevisionId, label, inputUnit, outputUnit, quantity, min, max,
-                sc == null ? null : sc.referenceInstrument(), keyed, noise, points, directions, cycles, frequencies);
+                sc == null ? null : sc.referenceInstrument(), keyed, noise, points, directions, cycles, frequencies,
+                appliedWindow);
     }
 
     /** @return every reading expected from one unit: the keyed ones and the noise samples */
@@ -164,6 +168,36 @@ public record BenchPlan(long procedureRevisionId, String procedureLabel, String 
                 return expected(keyed.size() + (int) point);
             }
         }
+    }
+
+    /**
+     * The value applied at a static set point, checked against the procedure's window.
+     *
+     * @param slot    the expected reading (its point is the set point)
+     * @param applied the applied value in the input unit, null for "at the set point"
+     * @return the applied value (the set point when none was given)
+     * @throws IllegalArgumentException when it is not finite, is given for a noise or sweep reading, or lies
+     *                                  outside the window (the message names both values)
+     */
+    public double appliedAt(ExpectedReading slot, Double applied) {
+        if (applied == null) {
+            return slot.point();
+        }
+        if (slot.test() != ReadingTest.STATIC) {
+            throw new IllegalArgumentException("'applied' is for static readings only; a " + slot.test()
+                    + " reading has none.");
+        }
+        if (!Double.isFinite(applied)) {
+            throw new IllegalArgumentException("'applied' must be a finite number.");
+        }
+        // a hair of tolerance so a window of exactly ±0.5 accepts 10.5 at 10 despite binary rounding
+        if (Math.abs(applied - slot.point()) > appliedWindow * (1 + 1e-9)) {
+            throw new IllegalArgumentException("The applied value " + Plain.number(applied) + " " + inputUnit
+                    + " lies more than ±" + Plain.number(appliedWindow) + " " + inputUnit + " from the set point "
+                    + Plain.number(slot.point()) + " " + inputUnit + " (" + procedureLabel + "): set the point again"
+                    + " and record what the reference then applies.");
+        }
+        return applied;
     }
 
     /** "10 bar UP, cycle 1", "160 Hz", "noise sample 12": how people name a slot. */

@@ -64,7 +64,7 @@ public class BenchService {
 
     static final String COLUMNS = "id, lot_id, serial, test, point, direction, cycle_no, slot_no, revision_no,"
             + " reading_value, unit, entered_value, entered_unit, instrument, recorded_by, recorded_at, client_token,"
-            + " supersedes_id, correction_reason, import_id,"
+            + " supersedes_id, correction_reason, import_id, applied, readout, excitation,"
             + " (select s.id from bench_reading s where s.supersedes_id = r.id) as superseded_by";
 
     /** {@link #COLUMNS} for readings known to be current (none supersedes them): no per-row subquery. */
@@ -74,8 +74,8 @@ public class BenchService {
 
     static final String INSERT = "insert into bench_reading (lot_id, serial, test, point, direction, cycle_no,"
             + " slot_no, revision_no, reading_value, unit, entered_value, entered_unit, instrument, recorded_by,"
-            + " recorded_at, client_token, supersedes_id, correction_reason, import_id)"
-            + " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+            + " recorded_at, client_token, supersedes_id, correction_reason, import_id, applied, readout, excitation)"
+            + " values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
 
     private static final int MAX_TOKEN = 80;
 
@@ -134,7 +134,9 @@ public class BenchService {
             SensorSpecification spec = catalogue.revision(p.specificationRevisionId()).orElseThrow(
                     () -> new IllegalArgumentException("Procedure " + p.label() + " names specification revision "
                             + p.specificationRevisionId() + ", which does not exist.")).specification();
-            return BenchPlan.of(id, p.label(), p.content(), spec.outputUnit(), spec.kind().inputDimension());
+            double window = p.content().staticCalibration() == null ? Double.POSITIVE_INFINITY
+                    : p.content().staticCalibration().appliedWindowFor(spec);
+            return BenchPlan.of(id, p.label(), p.content(), spec.outputUnit(), spec.kind().inputDimension(), window);
         });
     }
 
@@ -152,6 +154,11 @@ public class BenchService {
             return instruments.all().stream().filter(InstrumentView::selectable).toList();
         }
         return instruments.qualifying(plan.quantity(), plan.rangeMin(), plan.rangeMax(), plan.inputUnit());
+    }
+
+    /** The instruments in calibration today that may serve as readout or excitation supply. */
+    public List<InstrumentView> chainInstruments() {
+        return instruments.all().stream().filter(InstrumentView::selectable).toList();
     }
 
     // ---- recording
@@ -253,13 +260,19 @@ public class BenchService {
                     requireFits(plan, iv);
                     checked.put(instrument, iv);
                 }
+                double applied = plan.appliedAt(slot, in.applied());
+                String readout = chainInstrument(in.readout(), "readout", today, checked);
+                String excitation = chainInstrument(in.excitation(), "excitation", today, checked);
                 long id = insert(lotId, serial, slot, 0, value, plan.outputUnit(), entered, enteredUnit, iv.identifier(),
-                        who, now, token, null, null);
+                        who, now, token, null, null, applied, readout, excitation);
                 newSlots.merge(serial, 1, Integer::sum);
                 events.publishEvent(AuditEvent.of(READING, id, "RECORD", lot.label() + ", " + serial + ", "
                         + plan.describe(slot.slot()) + ": " + Plain.number(value) + " " + plan.outputUnit()
                         + (enteredUnit.equals(plan.outputUnit()) ? "" : " (entered " + Plain.number(entered) + " "
-                        + enteredUnit + ")") + " with " + iv.identifier()));
+                        + enteredUnit + ")") + (applied == slot.point() ? "" : ", applied " + Plain.number(applied)
+                        + " " + plan.inputUnit()) + " with " + iv.identifier()
+                        + (readout == null ? "" : ", readout " + readout)
+                        + (excitation == null ? "" : ", excitation " + excitation)));
                 saved.add(reading(id).orElseThrow());
             } catch (IllegalArgumentException e) {
                 throw new IllegalArgumentException(where + e.getMessage(), e);
@@ -267,6 +280,38 @@ public class BenchService {
         }
         newSlots.forEach((serial, n) -> addProgress(lotId, serial, n));
         return saved;
+    }
+
+    /**
+     * A readout or excitation instrument named for a reading: it must be in the register and in calibration at
+     * the reading's time (today), like the stimulus.
+     *
+     * @return its identifier, or null when none was named
+     */
+    String chainInstrument(String identifier, String role, LocalDate today, Map<String, InstrumentView> checked) {
+        if (identifier == null || identifier.isBlank()) {
+            return null;
+        }
+        String id = identifier.strip();
+        InstrumentView iv = checked.get(id);
+        if (iv == null) {
+            try {
+                iv = instruments.requireSelectable(id, today);
+            } catch (IllegalStateException | IllegalArgumentException e) {
+                throw withRole(e, "The " + role + " instrument " + id + ": ");
+            }
+            checked.put(id, iv);
+        }
+        return iv.identifier();
+    }
+
+    private static RuntimeException withRole(RuntimeException e, String prefix) {
+        String message = prefix + e.getMessage();
+        if (e instanceof org.dockgate.instruments.InstrumentNotSelectableException n) {
+            return new org.dockgate.instruments.InstrumentNotSelectableException(n.identifier(), n.day(), message);
+        }
+        return e instanceof IllegalArgumentException ? new IllegalArgumentException(message, e)
+                : new IllegalStateException(message, e);
     }
 
     /**
@@ -283,11 +328,18 @@ public class BenchService {
                 && in.value() != null && Double.compare(saved.enteredValue(), in.value()) == 0
                 && (in.unit() == null || in.unit().isBlank() ? saved.enteredUnit().equals(plan.outputUnit())
                     : saved.enteredUnit().equals(in.unit().strip()))
-                && in.instrument() != null && saved.instrument().equals(in.instrument().strip());
+                && in.instrument() != null && saved.instrument().equals(in.instrument().strip())
+                && (in.applied() == null ? saved.applied() == saved.point() : Double.compare(saved.applied(), in.applied()) == 0)
+                && sameOptional(saved.readout(), in.readout()) && sameOptional(saved.excitation(), in.excitation());
         if (!same) {
             throw new IllegalStateException(where + "The client token '" + token + "' was already used for a different"
                     + " reading; nothing of this submit was saved. Send a new client token for a new reading.");
         }
+    }
+
+    private static boolean sameOptional(Optional<String> saved, String given) {
+        String g = given == null || given.isBlank() ? null : given.strip();
+        return saved.orElse(null) == null ? g == null : saved.get().equals(g);
     }
 
     private BenchPlan planOfLot(long lotId) {
@@ -335,7 +387,7 @@ public class BenchService {
                         + " and serial = ? and slot_no = ?", Integer.class, old.lotId(), old.serial(), old.slot()) + 1;
                 long id = insert(old.lotId(), old.serial(), plan.expected(old.slot()), revision, value, plan.outputUnit(),
                         entered, enteredUnit, old.instrument(), currentUser(), clock.instant(), null, old.id(),
-                        reason.strip());
+                        reason.strip(), old.applied(), old.readout().orElse(null), old.excitation().orElse(null));
                 events.publishEvent(AuditEvent.withReason(READING, id, "CORRECT", lot.label() + ", " + old.serial()
                                 + ", " + plan.describe(old.slot()) + ": reading " + old.id() + " corrected by reading " + id,
                         reason.strip()).withChanges(List.of(FieldChange.of("value",
@@ -736,11 +788,12 @@ public class BenchService {
 
     static Object[] row(long lotId, String serial, ExpectedReading slot, int revision, double value, String unit,
                         double entered, String enteredUnit, String instrument, String who, Instant at, String token,
-                        Long supersedes, String reason, Long importId) {
+                        Long supersedes, String reason, Long importId, double applied, String readout,
+                        String excitation) {
         return new Object[] {lotId, serial, slot.test().name(), slot.point(),
             slot.direction().map(Direction::name).orElse("NONE"), slot.cycle().orElse(0), slot.slot(), revision, value,
             unit, entered, enteredUnit, instrument, who, OffsetDateTime.ofInstant(at, ZoneOffset.UTC), token, supersedes,
-            reason, importId};
+            reason, importId, applied, readout, excitation};
     }
 
     /** Binds a row of {@link #row} with explicit types, so nulls need no metadata round trip. */
@@ -780,13 +833,21 @@ public class BenchService {
         } else {
             ps.setLong(19, (Long) v[18]);
         }
+        ps.setDouble(20, (Double) v[19]);
+        for (int i = 20; i <= 21; i++) {
+            if (v[i] == null) {
+                ps.setNull(i + 1, Types.VARCHAR);
+            } else {
+                ps.setString(i + 1, (String) v[i]);
+            }
+        }
     }
 
     private long insert(long lotId, String serial, ExpectedReading slot, int revision, double value, String unit,
                         double entered, String enteredUnit, String instrument, String who, Instant at, String token,
-                        Long supersedes, String reason) {
+                        Long supersedes, String reason, double applied, String readout, String excitation) {
         Object[] values = row(lotId, serial, slot, revision, value, unit, entered, enteredUnit, instrument, who, at,
-                token, supersedes, reason, null);
+                token, supersedes, reason, null, applied, readout, excitation);
         GeneratedKeyHolder keys = new GeneratedKeyHolder();
         jdbc.update(c -> {
             PreparedStatement ps = c.prepareStatement(INSERT, new String[] {"id"});
@@ -807,8 +868,13 @@ public class BenchService {
         boolean hasSupersededBy = !rs.wasNull();
         long importId = rs.getLong("import_id");
         boolean hasImport = !rs.wasNull();
+        double point = rs.getDouble("point");
+        double applied = rs.getDouble("applied");
+        if (rs.wasNull()) {
+            applied = point; // saved before applied values were recorded: the set point
+        }
         return new Reading(rs.getLong("id"), rs.getLong("lot_id"), rs.getString("serial"),
-                ReadingTest.valueOf(rs.getString("test")), rs.getDouble("point"),
+                ReadingTest.valueOf(rs.getString("test")), point,
                 "NONE".equals(direction) ? Optional.empty() : Optional.of(Direction.valueOf(direction)),
                 cycle == 0 ? OptionalInt.empty() : OptionalInt.of(cycle), rs.getInt("slot_no"),
                 rs.getDouble("reading_value"), rs.getString("unit"), rs.getDouble("entered_value"),
@@ -818,7 +884,8 @@ public class BenchService {
                 hasSupersedes ? Optional.of(supersedes) : Optional.empty(),
                 Optional.ofNullable(rs.getString("correction_reason")),
                 hasSupersededBy ? Optional.of(supersededBy) : Optional.empty(),
-                hasImport ? Optional.of(importId) : Optional.empty());
+                hasImport ? Optional.of(importId) : Optional.empty(), applied,
+                Optional.ofNullable(rs.getString("readout")), Optional.ofNullable(rs.getString("excitation")));
     }
 
     JdbcTemplate jdbc() {

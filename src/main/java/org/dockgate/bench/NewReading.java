@@ -15,7 +15,18 @@ import org.dockgate.core.series.Direction;
  * @param unit        its unit (converted to the procedure's output unit); null means the output unit
  * @param instrument  the reference instrument's identifier (must be in calibration today)
  * @param clientToken chosen by the client once per reading, so a repeated submit is recognised; may be null
+ * @param applied     STATIC: the value the reference actually applied, in the procedure's input unit; null means
+ *                    the set point. It must lie within the procedure's window around the set point
+ * @param readout     the readout instrument's identifier (multimeter, DAQ, bridge); null when not recorded
+ * @param excitation  the excitation supply's identifier; null when not recorded
  */
 public record NewReading(String serial, ReadingTest test, Double point, Direction direction, Integer cycle,
-                         Double value, String unit, String instrument, String clientToken) {
+                         Double value, String unit, String instrument, String clientToken, Double applied,
+                         String readout, String excitation) {
+
+    /** A reading taken at its set point, with the stimulus only. */
+    public NewReading(String serial, ReadingTest test, Double point, Direction direction, Integer cycle,
+                      Double value, String unit, String instrument, String clientToken) {
+        this(serial, test, point, direction, cycle, value, unit, instrument, clientToken, null, null, null);
+    }
 }

@@ -5,12 +5,12 @@ import java.util.List;
 import java.util.stream.Collectors;
 
 /** Numbers as people write them in messages: no exponent, no trailing zeros. */
-final class Plain {
+public final class Plain {
 
     private Plain() {
     }
 
-    static String number(double value) {
+    public static String number(double value) {
         if (!Double.isFinite(value)) {
             return String.valueOf(value);
         }

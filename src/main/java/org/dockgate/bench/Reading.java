@@ -29,12 +29,17 @@ import org.dockgate.core.series.Direction;
  * @param correctionReason why, for a correction
  * @param supersededBy     the reading that corrects this one, when one does (then it no longer counts)
  * @param importId         the import this reading came with, if any
+ * @param applied          STATIC: the value the reference applied, in the input unit (the set point when none was
+ *                         recorded); the point otherwise
+ * @param readout          the readout instrument, if recorded
+ * @param excitation       the excitation supply, if recorded
  */
 public record Reading(long id, long lotId, String serial, ReadingTest test, double point,
                       Optional<Direction> direction, OptionalInt cycle, int slot, double value, String unit,
                       double enteredValue, String enteredUnit, String instrument, String recordedBy,
                       Instant recordedAt, Optional<String> clientToken, Optional<Long> supersedes,
-                      Optional<String> correctionReason, Optional<Long> supersededBy, Optional<Long> importId) {
+                      Optional<String> correctionReason, Optional<Long> supersededBy, Optional<Long> importId,
+                      double applied, Optional<String> readout, Optional<String> excitation) {
 
     /** @return whether a later correction replaces this reading */
     public boolean superseded() {

@@ -121,6 +121,8 @@ public class ReadingImport {
         }, lotId);
         String who = BenchService.currentUser();
         Instant now = bench.clock().instant();
+        java.time.LocalDate today = java.time.LocalDate.ofInstant(now, ZoneOffset.UTC);
+        Map<String, InstrumentView> chain = new HashMap<>();
         List<Object[]> batch = new ArrayList<>(BATCH);
         List<ImportOutcome.PreviewRow> first = new ArrayList<>();
         MessageDigest sha = sha256();
@@ -148,6 +150,24 @@ public class ReadingImport {
                             + " already has a reading (saved before, or earlier in this file); correct it instead");
                 }
                 filled.set(bit);
+                double applied;
+                String readout;
+                String excitation;
+                try {
+                    applied = plan.appliedAt(slot, row.offNominal() ? row.applied() : null);
+                } catch (IllegalArgumentException e) {
+                    throw new IllegalArgumentException("column 'applied': " + e.getMessage(), e);
+                }
+                try {
+                    readout = bench.chainInstrument(row.readout().orElse(null), "readout", today, chain);
+                } catch (IllegalArgumentException | IllegalStateException e) {
+                    throw new IllegalArgumentException("column 'readout': " + e.getMessage(), e);
+                }
+                try {
+                    excitation = bench.chainInstrument(row.excitation().orElse(null), "excitation", today, chain);
+                } catch (IllegalArgumentException | IllegalStateException e) {
+                    throw new IllegalArgumentException("column 'excitation': " + e.getMessage(), e);
+                }
                 if (first.size() < PREVIEW_ROWS) {
                     first.add(new ImportOutcome.PreviewRow(row.line(), row.serial(), test, plan.describe(slot.slot()),
                             row.value(), plan.outputUnit()));
@@ -156,7 +176,7 @@ public class ReadingImport {
                     newSlots.merge(row.serial(), 1, Integer::sum);
                     batch.add(BenchService.row(lotId, row.serial(), slot, 0, row.value(), plan.outputUnit(),
                             row.recordedValue(), unitOf(row, plan), instrument.identifier(), who, now, null, null, null,
-                            importId));
+                            importId, applied, readout, excitation));
                     if (batch.size() == BATCH) {
                         flush(jdbc, batch);
                     }

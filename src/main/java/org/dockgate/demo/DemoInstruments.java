@@ -53,7 +53,9 @@ class DemoInstruments implements DemoStep {
                             UncertaintyMode.valueOf(row.get("uncertaintyMode")), max))
                     .over(optional(row, "calibratedMin"), optional(row, "calibratedMax"), optional(row, "uncertaintyFloor"));
             NewInstrument instrument = new NewInstrument(row.get("identifier"), row.get("description"),
-                    row.get("quantity"), Double.parseDouble(row.get("rangeMin")), max, row.get("unit"), calibration);
+                    row.get("quantity"), Double.parseDouble(row.get("rangeMin")), max, row.get("unit"), calibration,
+                    row.get("resolution") == null || row.get("resolution").isBlank() ? null
+                            : Double.parseDouble(row.get("resolution")));
             DemoLoader.as("admin", () -> instruments.create(instrument));
         }
     }

@@ -111,10 +111,20 @@ class DemoLots implements DemoStep {
             double tempError = 0.02 * random.nextGaussian();
             double fso = fullScaleOutput(spec);
             List<NewReading> readings = new ArrayList<>();
+            String readout = readoutFor(spec);
+            String excitation = excitationFor(spec);
             for (ExpectedReading slot : plan.keyed()) {
                 double value;
+                Double applied = null;
                 if (slot.test() == ReadingTest.STATIC) {
+                    // The reference lands near, not on, the set point (a vented or unloaded zero is exact); the
+                    // sensor responds to what was applied.
                     double x = slot.point();
+                    boolean exactZero = x == 0 && spec.rtd() == null;
+                    if (!exactZero) {
+                        applied = Math.round((x + 0.15 * plan.appliedWindow() * random.nextGaussian()) * 1e4) / 1e4;
+                        x = applied;
+                    }
                     double shape = 4 * (x - spec.rangeMin()) / spec.span() * (1 - (x - spec.rangeMin()) / spec.span());
                     double down = slot.direction().orElse(Direction.UP) == Direction.DOWN ? hysteresis * fso : 0;
                     value = spec.rtd() != null
@@ -130,14 +140,14 @@ class DemoLots implements DemoStep {
                 readings.add(new NewReading(serial, slot.test(), slot.point(), slot.direction().orElse(null),
                         slot.cycle().isPresent() ? slot.cycle().getAsInt() : null, round(value, spec), plan.outputUnit(),
                         slot.test() == ReadingTest.SWEEP ? sweepInstrument(lot, instrument) : instrument,
-                        "demo-" + lot.id() + "-" + serial + "-" + slot.slot()));
+                        "demo-" + lot.id() + "-" + serial + "-" + slot.slot(), applied, readout, excitation));
             }
             if (withNoise && plan.noiseSamples() > 0) {
                 double sigma = spec.noiseFloor() == null ? 0.001 : 0.4 * spec.noiseFloor().limit() * Math.abs(nominal(spec, 1) - nominal(spec, 0));
                 for (int i = 0; i < plan.noiseSamples(); i++) {
                     readings.add(new NewReading(serial, ReadingTest.NOISE, (double) i, null, null,
                             round(sigma * random.nextGaussian(), spec), plan.outputUnit(), instrument,
-                            "demo-" + lot.id() + "-" + serial + "-n" + i));
+                            "demo-" + lot.id() + "-" + serial + "-n" + i, null, readout, excitation));
                 }
             }
             String operator = u % 2 == 0 ? "operator" : "operator2";
@@ -156,6 +166,23 @@ class DemoLots implements DemoStep {
 
     private static double round1(double v) {
         return Math.round(v * 10) / 10.0;
+    }
+
+    /** The demo's readout by output: the multimeter for volts, the bridge indicator for mV/V, the ohmmeter for an RTD. */
+    private static String readoutFor(SensorSpecification spec) {
+        if (spec.rtd() != null) {
+            return "RI-OHM-01";
+        }
+        return Units.isCompatible(spec.outputUnit(), "1") ? "RI-BRG-01" : "RI-DMM-02";
+    }
+
+    /**
+     * The excitation supply of a bridge sensor (pressure transducer, load cell); an accelerometer's IEPE supply is
+     * not modelled and an RTD's measuring current comes from the readout.
+     */
+    private static String excitationFor(SensorSpecification spec) {
+        return spec.kind() == org.dockgate.core.procedure.SensorKind.PRESSURE_TRANSDUCER
+                || spec.kind() == org.dockgate.core.procedure.SensorKind.LOAD_CELL ? "RI-PSU-01" : null;
     }
 
     private String sweepInstrument(LotView lot, String staticInstrument) {

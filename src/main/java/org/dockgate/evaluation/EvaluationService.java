@@ -2,7 +2,6 @@ package org.dockgate.evaluation;
 
 import org.dockgate.platform.CurrentActor;
 
-import java.math.BigDecimal;
 import java.time.Clock;
 import java.time.Instant;
 import java.time.LocalDate;
@@ -368,16 +367,22 @@ public class EvaluationService {
         List<UnitEvaluationView.SweepPoint> sweep = new ArrayList<>();
         List<Reading> staticReadings = new ArrayList<>();
         List<Reading> sweepReadings = new ArrayList<>();
+        List<Reading> readoutReadings = new ArrayList<>();
         for (Reading r : readings) {
             switch (r.test()) {
                 case STATIC -> {
                     var direction = r.direction().orElse(org.dockgate.core.series.Direction.UP);
                     int cycle = r.cycle().orElse(1);
-                    m.staticReading(r.point(), r.value(), direction, cycle);
-                    statics.add(new UnitEvaluationView.StaticPoint(r.point(), r.value(), direction.name(), cycle));
+                    // the applied value is the input; the set point groups the reading (issue 11)
+                    m.staticReading(r.applied(), r.value(), direction, cycle, r.point());
+                    statics.add(new UnitEvaluationView.StaticPoint(r.applied(), r.value(), direction.name(), cycle));
                     staticReadings.add(r);
+                    readoutReadings.add(r);
                 }
-                case NOISE -> m.noiseSample(r.value());
+                case NOISE -> {
+                    m.noiseSample(r.value());
+                    readoutReadings.add(r);
+                }
                 case SWEEP -> {
                     m.sweepPoint(r.point(), r.value());
                     sweep.add(new UnitEvaluationView.SweepPoint(r.point(), r.value()));
@@ -393,8 +398,11 @@ public class EvaluationService {
         Optional<ReferenceUncertainty> sweepRef = ReferencesInForce.of(sweepReadings, register, spec.inputUnit(), false,
                 used, problems);
         var conditions = bench.conditions(lot.id(), serial);
-        MeasurementContext context = new MeasurementContext(staticRef, sweepRef, readoutDigit(staticReadings),
-                conditions.map(c -> Environment.fromAmbient(c.ambientC(), REFERENCE_TEMPERATURE_C)));
+        // The readout's resolution comes from the register (never from the decimals typed); readings that name
+        // no readout are evaluated and say "readout not recorded".
+        MeasurementContext context = ChainInForce.apply(new MeasurementContext(staticRef, sweepRef,
+                OptionalDouble.empty(), conditions.map(c -> Environment.fromAmbient(c.ambientC(), REFERENCE_TEMPERATURE_C))),
+                readoutReadings, register, spec, used, problems);
         UnitResult result = UnitEvaluation.evaluate(spec, procedure.content(), procedure.settings().policy(),
                 m.context(context).build());
         if (!problems.isEmpty()) {
@@ -405,29 +413,14 @@ public class EvaluationService {
         Set<String> instrumentsUsed = new LinkedHashSet<>();
         staticReadings.forEach(r -> instrumentsUsed.add(r.instrument()));
         sweepReadings.forEach(r -> instrumentsUsed.add(r.instrument()));
+        readoutReadings.forEach(r -> {
+            r.readout().ifPresent(instrumentsUsed::add);
+            r.excitation().ifPresent(instrumentsUsed::add);
+        });
         Set<String> operators = readings.stream().map(Reading::recordedBy).collect(Collectors.toCollection(LinkedHashSet::new));
         return new UnitEvaluationView(serial, result, readings.size(), operators, instrumentsUsed,
                 conditions.map(c -> c.ambientC()), conditions.map(c -> c.relativeHumidityPercent()), statics, sweep,
                 List.copyOf(used.values()), false, conditions.flatMap(c -> c.deviationText()));
-    }
-
-    /**
-     * The readout's last digit, inferred from the values as entered (the finest decimal place any of them
-     * uses), converted to the output unit: the technician reads what the display shows, so its digit is
-     * the resolution (GUM F.2.2.1, rectangular with half-width digit / 2).
-     */
-    static OptionalDouble readoutDigit(List<Reading> readings) {
-        int decimals = -1;
-        double scale = 1;
-        for (Reading r : readings) {
-            if (r.enteredValue() == 0) {
-                continue;
-            }
-            int d = Math.max(0, new BigDecimal(Double.toString(r.enteredValue())).stripTrailingZeros().scale());
-            decimals = Math.max(decimals, Math.min(d, 9));
-            scale = r.value() / r.enteredValue();
-        }
-        return decimals < 0 ? OptionalDouble.empty() : OptionalDouble.of(Math.abs(Math.pow(10, -decimals) * scale));
     }
 
     private LotView lot(long lotId) {

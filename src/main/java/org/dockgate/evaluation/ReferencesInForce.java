@@ -61,15 +61,15 @@ final class ReferencesInForce {
                         + " the reading with an instrument that was in calibration.");
                 continue;
             }
-            if (matchByPoint && !instrument.get().inCalibratedRange(record.get(), r.point(), inputUnit)) {
+            if (matchByPoint && !instrument.get().inCalibratedRange(record.get(), r.applied(), inputUnit)) {
                 // The certificate says nothing about that point: the instrument cannot serve it.
-                problems.add("The reading at " + r.point() + " " + inputUnit + " (" + r.test() + ") was taken with "
+                problems.add("The reading at " + r.applied() + " " + inputUnit + " (" + r.test() + ") was taken with "
                         + r.instrument() + ", calibrated over " + instrument.get().calibratedRange(record.get())
                         + " only (certificate " + record.get().certificateNumber() + "): the point lies outside the"
                         + " range of the reference in force; correct the reading with an instrument calibrated there.");
                 continue;
             }
-            uses.add(new Use(instrument.get(), record.get(), r.point()));
+            uses.add(new Use(instrument.get(), record.get(), r.applied()));
         }
         if (uses.isEmpty()) {
             return Optional.empty();

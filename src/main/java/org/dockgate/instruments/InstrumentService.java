@@ -251,6 +251,13 @@ public class InstrumentService {
         NewCalibration calibration = checkCalibration(input.calibration(), min, max, unit, null);
         ReferenceInstrument entry = new ReferenceInstrument(identifier, description, quantity.label(), min, max,
                 unit, clock.instant());
+        if (input.resolution() != null) {
+            if (!(input.resolution() > 0 && Double.isFinite(input.resolution()))) {
+                throw new InstrumentException("resolution", "A readout's resolution is a positive number in " + unit
+                        + " (the digit of the range used), got " + input.resolution() + ".");
+            }
+            entry.setResolution(input.resolution());
+        }
         int sequence = entry.nextCalibration();
         try {
             entry = instruments.saveAndFlush(entry);
@@ -467,7 +474,8 @@ public class InstrumentService {
         sorted.sort(NEWEST_FIRST);
         return InstrumentView.of(i.getIdentifier(), i.getDescription(), i.getQuantity(), i.getRangeMin(),
                 i.getRangeMax(), i.getUnit(), sorted.stream().map(InstrumentCalibration::toRecord).toList(), today,
-                i.getVersion());
+                i.getVersion(), i.getResolution() == null ? java.util.OptionalDouble.empty()
+                        : java.util.OptionalDouble.of(i.getResolution()));
     }
 
     private static final Comparator<InstrumentView> BY_DUE_DATE = Comparator

@@ -27,19 +27,31 @@ import org.dockgate.core.quantity.Units;
 public record InstrumentView(String identifier, String description, String quantity, double rangeMin,
                              double rangeMax, String unit, CalibrationRecord current,
                              List<CalibrationRecord> calibrations, LocalDate asOf, CalibrationStatus status,
-                             long daysUntilDue, long version) {
+                             long daysUntilDue, long version, java.util.OptionalDouble resolution) {
 
     public InstrumentView {
         calibrations = List.copyOf(calibrations);
+        resolution = resolution == null ? java.util.OptionalDouble.empty() : resolution;
     }
 
     static InstrumentView of(String identifier, String description, String quantity, double rangeMin,
                              double rangeMax, String unit, List<CalibrationRecord> newestFirst, LocalDate today,
                              long version) {
+        return of(identifier, description, quantity, rangeMin, rangeMax, unit, newestFirst, today, version,
+                java.util.OptionalDouble.empty());
+    }
+
+    /**
+     * @param resolution a readout's resolution as the register records it (the digit of the range used, in
+     *                   {@code unit}), empty when not recorded
+     */
+    static InstrumentView of(String identifier, String description, String quantity, double rangeMin,
+                             double rangeMax, String unit, List<CalibrationRecord> newestFirst, LocalDate today,
+                             long version, java.util.OptionalDouble resolution) {
         CalibrationRecord current = newestFirst.get(0);
         return new InstrumentView(identifier, description, quantity, rangeMin, rangeMax, unit, current, newestFirst,
                 today, CalibrationStatus.of(current.dueOn(), today),
-                ChronoUnit.DAYS.between(today, current.dueOn()), version);
+                ChronoUnit.DAYS.between(today, current.dueOn()), version, resolution);
     }
 
     /** @return whether the instrument is due within {@value CalibrationStatus#DUE_SOON_DAYS} days (flag it) */

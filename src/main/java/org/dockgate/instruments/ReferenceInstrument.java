@@ -40,6 +40,10 @@ class ReferenceInstrument {
     @Column(name = "calibration_count", nullable = false)
     private int calibrationCount;
 
+    /** A readout's resolution (its digit on the range used, in {@link #unit}); null when not recorded. */
+    @Column(name = "resolution")
+    private Double resolution;
+
     @Column(name = "created_at", nullable = false)
     private Instant createdAt;
 
@@ -86,6 +90,14 @@ class ReferenceInstrument {
 
     String getUnit() {
         return unit;
+    }
+
+    Double getResolution() {
+        return resolution;
+    }
+
+    void setResolution(Double resolution) {
+        this.resolution = resolution;
     }
 
     int getCalibrationCount() {

@@ -82,7 +82,7 @@ final class ProposalEditor {
                     }
                     List<Double> percent = points.stream().map(x -> (x - spec.rangeMin()) / spec.span() * 100).toList();
                     s = new StaticCalibration(percent, points, s.inputUnit(), s.directions(), s.cycles(), s.settleSeconds(),
-                            s.referenceInstrument(), s.reasoning());
+                            s.referenceInstrument(), s.reasoning(), s.appliedWindow());
                 }
                 case "static.cycles" -> {
                     int cycles = whole(value, key, 1, 20);
@@ -90,11 +90,12 @@ final class ProposalEditor {
                         throw new IllegalArgumentException("Repeatability is specified: keep at least 3 cycles.");
                     }
                     s = new StaticCalibration(s.pointsPercentOfSpan(), s.pointsInput(), s.inputUnit(), s.directions(),
-                            cycles, s.settleSeconds(), s.referenceInstrument(), s.reasoning());
+                            cycles, s.settleSeconds(), s.referenceInstrument(), s.reasoning(), s.appliedWindow());
                 }
                 case "static.settleSeconds" -> s = new StaticCalibration(s.pointsPercentOfSpan(), s.pointsInput(),
                         s.inputUnit(), s.directions(), s.cycles(), whole(value, key, 0, 7200), s.referenceInstrument(),
-                        s.reasoning());
+                        s.reasoning(), s.appliedWindow());
+                case "static.appliedWindow" -> s = s.withAppliedWindow(positive(value, key));
                 case "noise.samples" -> {
                     require(n != null, "This procedure has no noise capture.");
                     int samples = whole(value, key, 100, 100_000_000);

@@ -61,6 +61,11 @@ class BenchController {
         public String inputId() {
             return "r-" + expected.slot();
         }
+
+        /** The applied-value field of a static point. */
+        public String appliedId() {
+            return "a-" + expected.slot();
+        }
     }
 
     @GetMapping("/bench")
@@ -147,6 +152,12 @@ class BenchController {
         model.addAttribute("noiseDone", noiseDone);
         model.addAttribute("instruments", instruments);
         model.addAttribute("chosenInstrument", chosen);
+        List<InstrumentView> chain = lot.awaitingMeasurement() ? bench.chainInstruments() : List.of();
+        model.addAttribute("chainInstruments", chain);
+        Reading last = current.isEmpty() ? null : current.get(current.size() - 1);
+        model.addAttribute("chosenReadout", last == null ? null : last.readout().orElse(null));
+        model.addAttribute("chosenExcitation", last == null ? null : last.excitation().orElse(null));
+        model.addAttribute("appliedWindow", org.dockgate.bench.Plain.number(plan.appliedWindow()));
         model.addAttribute("conditions", bench.conditions(lotId, serial).orElse(null));
         model.addAttribute("limits", bench.limitsOf(lot));
         model.addAttribute("history", bench.history(lotId, serial, (long) (shown - 1) * PAGE_SIZE, PAGE_SIZE));
@@ -179,9 +190,11 @@ class BenchController {
             }
             try {
                 ValueText v = ValueText.parse(text);
+                String appliedText = form.get("a-" + e.slot());
+                Double applied = appliedText == null || appliedText.isBlank() ? null : appliedNumber(appliedText);
                 bench.record(lotId, new NewReading(serial, e.test(), e.point(), e.direction().orElse(null),
                         e.cycle().isPresent() ? e.cycle().getAsInt() : null, v.value(), v.unit(), instrument,
-                        pageToken + "-" + e.slot()));
+                        pageToken + "-" + e.slot(), applied, form.get("readout"), form.get("excitation")));
                 saved++;
             } catch (IllegalArgumentException | IllegalStateException ex) {
                 problems.add(plan.describe(e.slot()) + ": " + ex.getMessage());
@@ -192,6 +205,19 @@ class BenchController {
             redirect.addFlashAttribute("problem", String.join(" · ", problems));
         }
         return "redirect:" + unitPath(lotId, serial);
+    }
+
+    /** An applied value as typed: a plain number in the procedure's input unit. */
+    static Double appliedNumber(String text) {
+        try {
+            double v = Double.parseDouble(text.strip());
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("The applied value '" + text.strip() + "' is not a number.");
+        }
     }
 
     @PostMapping("/bench/lots/{lotId}/units/{serial}/conditions")

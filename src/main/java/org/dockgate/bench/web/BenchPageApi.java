@@ -35,7 +35,7 @@ class BenchPageApi {
 
     /** What the page sends for one input: the slot's point and the text typed ("20.11" or "0.02011 V"). */
     record Autosave(String serial, String test, Double point, String direction, Integer cycle, String text,
-                    String instrument, String clientToken) {
+                    String instrument, String clientToken, String applied, String readout, String excitation) {
     }
 
     @PostMapping(path = "/bench/lots/{lotId}/autosave", consumes = MediaType.APPLICATION_JSON_VALUE,
@@ -47,7 +47,9 @@ class BenchPageApi {
         ValueText v = ValueText.parse(body.text());
         Direction d = body.direction() == null || body.direction().isBlank() ? null : Direction.valueOf(body.direction());
         Reading saved = bench.record(lotId, new NewReading(body.serial(), ReadingTest.of(body.test()), body.point(), d,
-                body.cycle(), v.value(), v.unit(), body.instrument(), body.clientToken()));
+                body.cycle(), v.value(), v.unit(), body.instrument(), body.clientToken(),
+                body.applied() == null || body.applied().isBlank() ? null : BenchController.appliedNumber(body.applied()),
+                body.readout(), body.excitation()));
         return ResponseEntity.status(HttpStatus.CREATED).body(ReadingResponse.of(saved));
     }
 

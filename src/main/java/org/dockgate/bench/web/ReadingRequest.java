@@ -7,9 +7,13 @@ import tools.jackson.core.JacksonException;
 import tools.jackson.databind.JsonNode;
 import tools.jackson.databind.json.JsonMapper;
 
-/** A reading as a client sends it (fields of the contract). */
+/**
+ * A reading as a client sends it (fields of the issue's contract). {@code applied} is optional (absent: the set
+ * point); {@code readout} and {@code excitation} name the other instruments of the measurement chain.
+ */
 record ReadingRequest(String serial, String test, Double point, String direction, Integer cycle, Double value,
-                      String unit, String instrument, String clientToken) {
+                      String unit, String instrument, String clientToken, Double applied, String readout,
+                      String excitation) {
 
     /** Reads one element; a wrongly typed field is named ("[2].value: …"). */
     static ReadingRequest of(JsonMapper json, JsonNode node, String where) {
@@ -38,6 +42,7 @@ record ReadingRequest(String serial, String test, Double point, String direction
                 throw new IllegalArgumentException("'direction' must be UP or DOWN, got '" + direction + "'.");
             }
         }
-        return new NewReading(serial, ReadingTest.of(test), point, d, cycle, value, unit, instrument, clientToken);
+        return new NewReading(serial, ReadingTest.of(test), point, d, cycle, value, unit, instrument, clientToken,
+                applied, readout, excitation);
     }
 }

@@ -20,10 +20,14 @@ import org.dockgate.core.series.Direction;
  * @param recordedPoint the point column as written
  * @param recordedValue the value as written, before conversion
  * @param recordedUnit  the unit column as written
+ * @param applied       STATIC: the value the reference applied, in the expected input unit (the optional column
+ *                      {@code applied}; the set point when absent); otherwise the point
+ * @param readout       the optional column {@code readout}: the readout instrument's identifier, if written
+ * @param excitation    the optional column {@code excitation}: the excitation supply's identifier, if written
  */
 public record AcquiredReading(long line, String serial, AcquisitionTest test, double point,
         Optional<Direction> direction, OptionalInt cycle, double value, String recordedPoint, double recordedValue,
-        String recordedUnit) {
+        String recordedUnit, double applied, Optional<String> readout, Optional<String> excitation) {
 
     /** Checks the fields are present and consistent with the test. */
     public AcquiredReading {
@@ -33,6 +37,8 @@ public record AcquiredReading(long line, String serial, AcquisitionTest test, do
         Objects.requireNonNull(cycle, "cycle");
         Objects.requireNonNull(recordedPoint, "recordedPoint");
         Objects.requireNonNull(recordedUnit, "recordedUnit");
+        Objects.requireNonNull(readout, "readout");
+        Objects.requireNonNull(excitation, "excitation");
         if ((test == AcquisitionTest.STATIC) != (direction.isPresent() && cycle.isPresent())) {
             throw new IllegalArgumentException("A STATIC reading, and only a STATIC reading, has a direction and a cycle");
         }
@@ -41,14 +47,14 @@ public record AcquiredReading(long line, String serial, AcquisitionTest test, do
     /**
      * This STATIC reading as a calibration point.
      *
-     * @return (point, value, direction, cycle)
+     * @return (applied, value, direction, cycle, set point)
      * @throws IllegalStateException when the reading is not STATIC
      */
     public CalibrationPoint toCalibrationPoint() {
         if (test != AcquisitionTest.STATIC) {
             throw new IllegalStateException("Line " + line + " is a " + test + " reading, not a static one");
         }
-        return new CalibrationPoint(point, value, direction.orElseThrow(), cycle.getAsInt());
+        return new CalibrationPoint(applied, value, direction.orElseThrow(), cycle.getAsInt(), point);
     }
 
     /**
@@ -62,5 +68,10 @@ public record AcquiredReading(long line, String serial, AcquisitionTest test, do
             throw new IllegalStateException("Line " + line + " is a " + test + " reading, not a sweep one");
         }
         return new FrequencyPoint(point, value);
+    }
+
+    /** @return whether the row wrote an applied value different from its set point */
+    public boolean offNominal() {
+        return applied != point;
     }
 }

@@ -40,6 +40,11 @@ import org.dockgate.core.series.Direction;
  * Blank lines, and rows whose fields are all empty (spreadsheet exports), are skipped; a leading byte-order
  * mark is ignored; fields may be quoted (RFC 4180, Commons CSV).
  *
+ * <p>After the seven columns the header may name the optional columns {@value #APPLIED} (STATIC rows: the value
+ * the reference applied, a number with an optional unit like {@code point}; empty → the set point),
+ * {@value #READOUT} and {@value #EXCITATION} (the identifiers of the readout and the excitation supply; empty →
+ * not recorded), each at most once, in any order. Files without them import as before.
+ *
  * <p>Numbers are plain decimals with an optional exponent ({@code -1.5}, {@code 2e-3}); NaN, infinities,
  * numbers too large for double precision, decimal commas and hexadecimal are refused.
  */
@@ -50,6 +55,17 @@ public final class AcquisitionCsv {
 
     /** The columns in order. */
     public static final List<String> COLUMNS = List.of(HEADER.split(","));
+
+    /** Optional column: the value the reference applied (STATIC). */
+    public static final String APPLIED = "applied";
+    /** Optional column: the readout instrument. */
+    public static final String READOUT = "readout";
+    /** Optional column: the excitation supply. */
+    public static final String EXCITATION = "excitation";
+    /** The optional columns that may follow the seven. */
+    public static final List<String> OPTIONAL_COLUMNS = List.of(APPLIED, READOUT, EXCITATION);
+    /** The longest instrument identifier accepted in the optional columns. */
+    public static final int MAX_INSTRUMENT_LENGTH = 40;
 
     /** At most this many errors are listed; the rest are counted. */
     public static final int MAX_LISTED_ERRORS = 200;
@@ -74,6 +90,9 @@ public final class AcquisitionCsv {
     private final Map<String, Map<String, Object>> conversions = new HashMap<>();
     private final List<RowError> errors = new ArrayList<>();
     private long errorsNotListed;
+    /** The header's optional column → its index; set when the header is read. */
+    private final Map<String, Integer> optional = new HashMap<>();
+    private int width = COLUMNS.size();
 
     private AcquisitionCsv(ExpectedUnits units, Consumer<AcquiredReading> consumer) {
         this.units = units;
@@ -197,13 +216,27 @@ public final class AcquisitionCsv {
         return true;
     }
 
-    private static Optional<String> headerProblem(CSVRecord record) {
+    private Optional<String> headerProblem(CSVRecord record) {
         List<String> names = new ArrayList<>();
         for (String field : record) {
             names.add(field.strip());
         }
         if (!names.isEmpty()) {
             names.set(0, stripBom(names.get(0)));
+        }
+        if (names.size() > COLUMNS.size() && names.subList(0, COLUMNS.size()).equals(COLUMNS)) {
+            for (int i = COLUMNS.size(); i < names.size(); i++) {
+                String name = names.get(i);
+                if (!OPTIONAL_COLUMNS.contains(name) || optional.containsKey(name)) {
+                    optional.clear();
+                    return Optional.of("the header's column " + (i + 1) + " is '" + name + "': after '" + HEADER
+                            + "' only the optional columns " + String.join(", ", OPTIONAL_COLUMNS)
+                            + " may follow, each once");
+                }
+                optional.put(name, i);
+            }
+            width = names.size();
+            return Optional.empty();
         }
         if (names.equals(COLUMNS)) {
             return Optional.empty();
@@ -223,8 +256,9 @@ public final class AcquisitionCsv {
 
     /** Validates one data row; returns null after recording its errors. */
     private AcquiredReading row(long line, CSVRecord record) {
-        if (record.size() != COLUMNS.size()) {
-            error(line, null, record.size() + " fields, expected " + COLUMNS.size() + " (" + HEADER + ")");
+        if (record.size() != width) {
+            error(line, null, record.size() + " fields, expected " + width + " (" + HEADER
+                    + (optional.isEmpty() ? "" : " and the header's optional columns") + ")");
             return null;
         }
         long before = errorsSeen();
@@ -271,10 +305,39 @@ public final class AcquisitionCsv {
                 error(line, "value", "'" + valueText + "' is not an amplitude; a sweep value must be greater than 0");
             }
         }
+        double applied = point;
+        String appliedText = optionalField(record, APPLIED);
+        if (!appliedText.isEmpty()) {
+            if (test == AcquisitionTest.STATIC) {
+                applied = quantity(line, APPLIED, appliedText, units.inputUnit(), false);
+            } else if (test != null) {
+                mustBeEmpty(line, APPLIED, appliedText, test);
+            }
+        }
+        Optional<String> readout = instrument(line, READOUT, optionalField(record, READOUT));
+        Optional<String> excitation = instrument(line, EXCITATION, optionalField(record, EXCITATION));
         if (errorsSeen() > before || test == null) {
             return null;
         }
-        return new AcquiredReading(line, serial, test, point, direction, cycle, value, pointText, recorded, unitText);
+        return new AcquiredReading(line, serial, test, point, direction, cycle, value, pointText, recorded, unitText,
+                applied, readout, excitation);
+    }
+
+    private String optionalField(CSVRecord record, String column) {
+        Integer index = optional.get(column);
+        return index == null ? "" : record.get(index).strip();
+    }
+
+    private Optional<String> instrument(long line, String column, String text) {
+        if (text.isEmpty()) {
+            return Optional.empty();
+        }
+        if (text.length() > MAX_INSTRUMENT_LENGTH) {
+            error(line, column, "is " + text.length() + " characters long, an instrument identifier has at most "
+                    + MAX_INSTRUMENT_LENGTH);
+            return Optional.empty();
+        }
+        return Optional.of(text);
     }
 
     private static AcquisitionTest testOf(String text) {
@@ -522,7 +585,7 @@ public final class AcquisitionCsv {
     private void refusal(long line, String message) {
         String text = message == null ? "refused" : message;
         Matcher m = COLUMN_PREFIX.matcher(text);
-        if (m.lookingAt() && COLUMNS.contains(m.group(1))) {
+        if (m.lookingAt() && (COLUMNS.contains(m.group(1)) || OPTIONAL_COLUMNS.contains(m.group(1)))) {
             error(line, m.group(1), text.substring(m.end()));
         } else {
             error(line, null, text);

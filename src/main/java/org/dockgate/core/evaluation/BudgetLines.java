@@ -90,6 +90,84 @@ final class BudgetLines {
     }
 
     /**
+     * The readout's resolution line from the context: the register's digit of the readout named in the context,
+     * "readout not recorded" when the readings name none, else the digit given (as {@link #resolution}).
+     */
+    static UncertaintyContribution resolution(MeasurementContext context, String outputUnit,
+            double sensitivityCoefficient, String how) {
+        if (context.readoutNotRecorded()) {
+            return none("readout resolution: readout not recorded for these readings, no resolution is assumed and"
+                    + " none is included");
+        }
+        if (context.readout().isPresent()) {
+            ReadoutInstrument r = context.readout().get();
+            if (context.readoutResolution().isEmpty()) {
+                return none("readout " + r.name() + " resolution: not in the register, no contribution (the"
+                        + " evaluation is incomplete)");
+            }
+            double d = context.readoutResolution().getAsDouble();
+            return UncertaintyContribution.halfWidth("readout " + r.name() + " resolution: δ = " + fmt(d) + " "
+                            + outputUnit + " (register), rectangular with half-width δ/2" + how, d / 2.0,
+                    Distribution.RECTANGULAR).withSensitivityCoefficient(sensitivityCoefficient);
+        }
+        return resolution(context.readoutResolution(), outputUnit, sensitivityCoefficient, how);
+    }
+
+    /**
+     * The readout's certificate at a reading y (a point error there): u = U(y)/k in output units (GUM 4.3.3),
+     * carried by c. No line when the context has no readout information (callers that never record one);
+     * "readout not recorded" when the readings name none.
+     */
+    static List<UncertaintyContribution> readout(MeasurementContext context, double reading, String outputUnit,
+            double sensitivityCoefficient, String how) {
+        if (context.readoutNotRecorded()) {
+            return List.of(none("readout: not recorded for these readings, its uncertainty is not included"));
+        }
+        if (context.readout().isEmpty()) {
+            return List.of();
+        }
+        ReadoutInstrument r = context.readout().get();
+        double expanded = r.expandedAt(reading);
+        return List.of(UncertaintyContribution.expanded("readout " + r.name() + ": U = " + fmt(expanded) + " "
+                + outputUnit + " (k = " + fmt(r.coverageFactor()) + ") at " + fmt(reading) + " " + outputUnit + how,
+                expanded, r.coverageFactor()).withSensitivityCoefficient(sensitivityCoefficient));
+    }
+
+    /** The readout's line where a common error at a set point cancels (a difference of readings at the point). */
+    static List<UncertaintyContribution> readoutCancels(MeasurementContext context, String metricLabel) {
+        if (context.readoutNotRecorded()) {
+            return List.of(none("readout: not recorded for these readings"));
+        }
+        return context.readout().map(r -> List.of(none("readout " + r.name() + ": its error at a set point is the"
+                + " same in every reading there and cancels in the " + metricLabel + ", no contribution")))
+                .orElse(List.of());
+    }
+
+    /**
+     * The excitation supply's line: a scale error u(V)/V × |base| (the base is what it scales: |reading|, |slope|
+     * or |offset|), carried by c; a line of zero with the reason when the measurement cancels it or the metric
+     * does not change under a scale error (base NaN). No line without an excitation in the context.
+     */
+    static List<UncertaintyContribution> excitation(MeasurementContext context, String metricLabel, double base,
+            double sensitivityCoefficient) {
+        if (context.excitation().isEmpty()) {
+            return List.of();
+        }
+        ExcitationSupply e = context.excitation().get();
+        if (e.cancelled()) {
+            return List.of(none("excitation " + e.name() + ": " + e.why() + ", its error cancels, no contribution"));
+        }
+        if (Double.isNaN(base)) {
+            return List.of(none("excitation " + e.name() + ": a scale error of every reading does not change the "
+                    + metricLabel + " (a figure relative to the same readings), no contribution"));
+        }
+        return List.of(UncertaintyContribution.standard("excitation " + e.name() + ": u(V)/V = "
+                        + fmt(e.relativeStandardUncertainty() * 100) + " %" + (e.why().isEmpty() ? "" : " " + e.why())
+                        + ", a scale error × " + fmt(Math.abs(base)), e.relativeStandardUncertainty() * Math.abs(base),
+                Double.POSITIVE_INFINITY).withSensitivityCoefficient(sensitivityCoefficient));
+    }
+
+    /**
      * The environment's lines: a rectangular half-width |coefficient| × |ΔT| on the quantity the coefficient
      * acts on (see {@link Environment}).
      *

@@ -38,8 +38,14 @@ final class StaticMetrics {
     private final SensorSpecification spec;
     private final DecisionPolicy policy;
     private final MeasurementContext context;
+    /** The readings at their applied inputs: the fit, accuracy and RTD errors. */
     private final CalibrationSeries series;
+    /** The readings referred to their set points along the fitted slope: grouping metrics. */
+    private final CalibrationSeries grouped;
+    /** The fit of {@link #series}: sensitivity, offset. */
     private final StaticCharacteristics characteristics;
+    /** Of {@link #grouped}: nonlinearity, hysteresis, repeatability (the same as the fit's when all are on nominal). */
+    private final StaticCharacteristics groupedCharacteristics;
     private final String notEvaluable;
     private final String in;
     private final String out;
@@ -53,19 +59,35 @@ final class StaticMetrics {
         this.in = spec.inputUnit();
         this.out = spec.outputUnit();
         StaticCharacteristics sc = null;
+        StaticCharacteristics gc = null;
+        CalibrationSeries reduced = this.series;
         String reason = "no static readings yet";
         if (this.series != null) {
-            if (this.series.distinctInputs().length < 2) {
+            boolean offNominal = this.series.points().stream().anyMatch(CalibrationPoint::offNominal);
+            long setPoints = this.series.points().stream().mapToDouble(CalibrationPoint::nominal).distinct().count();
+            if (setPoints < 2) {
                 reason = "readings at two set points at least are needed, there are readings at one only";
             } else {
                 try {
                     sc = StaticCharacteristics.of(this.series, spec.rangeMin(), spec.rangeMax());
+                    if (offNominal) {
+                        double slope = sc.sensitivity();
+                        reduced = CalibrationSeries.of(this.series.points().stream()
+                                .map(p -> p.reducedToNominal(slope)).toList());
+                        gc = StaticCharacteristics.of(reduced, spec.rangeMin(), spec.rangeMax());
+                    } else {
+                        gc = sc;
+                    }
                 } catch (UnevaluableException e) {
                     reason = e.getMessage();
+                    sc = null;
+                    gc = null;
                 }
             }
         }
         this.characteristics = sc;
+        this.groupedCharacteristics = gc;
+        this.grouped = reduced;
         this.notEvaluable = reason;
     }
 
@@ -79,6 +101,13 @@ final class StaticMetrics {
             throw new UnevaluableException(notEvaluable);
         }
         return characteristics;
+    }
+
+    private StaticCharacteristics groupedFit() {
+        if (groupedCharacteristics == null) {
+            throw new UnevaluableException(notEvaluable);
+        }
+        return groupedCharacteristics;
     }
 
     private CalibrationSeries readings() {
@@ -104,8 +133,11 @@ final class StaticMetrics {
         lines.add(BudgetLines.reference(context.staticReference(), top, in, Math.abs(slope) / Math.abs(top),
                 ", the top point; the slope takes the reference's error as a scale error (in proportion to the"
                         + " input): c = S/x"));
-        lines.add(BudgetLines.resolution(context.readoutResolution(), out, f / Math.sqrt(sxx),
+        lines.add(BudgetLines.resolution(context, out, f / Math.sqrt(sxx),
                 ", independent at each reading: c = 1/√S_xx"));
+        lines.addAll(BudgetLines.readout(context, sc.fit().valueAt(top), out, f / Math.abs(top),
+                ", the top reading, taken as a scale error: c = 1/x"));
+        lines.addAll(BudgetLines.excitation(context, "sensitivity", slope, 1.0));
         lines.addAll(BudgetLines.environment(context.environment(), "sensitivity", slope, 1.0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
         Judged judged = Judgement.judge(slope, tolerance, lines, policy);
@@ -130,8 +162,11 @@ final class StaticMetrics {
                 : BudgetLines.none("Type A: two readings only, the intercept's scatter cannot be evaluated"));
         lines.add(BudgetLines.reference(context.staticReference(), nearestZero, in, Math.abs(sc.sensitivity()) * f,
                 ", the point nearest zero input; the offset takes the reference's error there as a point error: c = S"));
-        lines.add(BudgetLines.resolution(context.readoutResolution(), out,
+        lines.add(BudgetLines.resolution(context, out,
                 f * Math.sqrt(1.0 / x.length + mean * mean / sxx), ", independent at each reading: c = √(1/n + x̄²/S_xx)"));
+        lines.addAll(BudgetLines.readout(context, sc.fit().valueAt(nearestZero), out, f,
+                ", the reading nearest zero input: c = 1"));
+        lines.addAll(BudgetLines.excitation(context, "zero offset", offset, 1.0));
         lines.addAll(BudgetLines.environment(context.environment(), "zero offset", offset, 1.0,
                 sc.fullScaleOutput() * f, 1.0));
         Tolerance tolerance = Judgement.tolerance(a);
@@ -141,10 +176,10 @@ final class StaticMetrics {
     }
 
     MetricResult nonlinearity(MetricAcceptance a) {
-        StaticCharacteristics sc = fit();
+        StaticCharacteristics sc = groupedFit();
         boolean terminal = spec.nonlinearityReference() == NonlinearityReference.TERMINAL;
         double measured = terminal ? sc.nonlinearityTerminalPercentFso() : sc.nonlinearityBestFitPercentFso();
-        NavigableMap<Double, Double> curve = series.meanOutputByInput();
+        NavigableMap<Double, Double> curve = grouped.meanOutputByInput();
         double xLo = curve.firstKey();
         double xHi = curve.lastKey();
         double yLo = curve.firstEntry().getValue();
@@ -172,7 +207,10 @@ final class StaticMetrics {
         lines.add(BudgetLines.referenceLargest(context.staticReference(), curve.keySet(), in, 100.0 / spec.span(),
                 ", the largest over the set points; the deviation from a line takes the reference's error as a"
                         + " point error, and every set point fixes the line: c = 100/span"));
-        lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 100/FSO"));
+        lines.add(BudgetLines.resolution(context, out, perOutput, ": c = 100/FSO"));
+        lines.addAll(BudgetLines.readout(context, curve.get(worstInput), out, perOutput,
+                ", the set point of the largest deviation: c = 100/FSO"));
+        lines.addAll(BudgetLines.excitation(context, "nonlinearity", Double.NaN, 0));
         lines.addAll(BudgetLines.environment(context.environment(), "nonlinearity", Double.NaN, 0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
         Judged judged = Judgement.judge(measured, tolerance, lines, policy);
@@ -183,13 +221,13 @@ final class StaticMetrics {
     }
 
     MetricResult hysteresis(MetricAcceptance a) {
-        StaticCharacteristics sc = fit();
+        StaticCharacteristics sc = groupedFit();
         if (sc.hysteresisPercentFso().isEmpty()) {
             throw new UnevaluableException("no set point was read in both directions yet (DOWN readings missing)");
         }
         double measured = sc.hysteresisPercentFso().getAsDouble();
-        NavigableMap<Double, Double> up = series.meanOutputByInput(Direction.UP);
-        NavigableMap<Double, Double> down = series.meanOutputByInput(Direction.DOWN);
+        NavigableMap<Double, Double> up = grouped.meanOutputByInput(Direction.UP);
+        NavigableMap<Double, Double> down = grouped.meanOutputByInput(Direction.DOWN);
         double worstInput = Double.NaN;
         double worst = -1;
         for (Map.Entry<Double, Double> e : up.entrySet()) {
@@ -212,8 +250,10 @@ final class StaticMetrics {
                 : BudgetLines.none("Type A: no set point read twice from one direction, scatter not evaluated"));
         lines.add(BudgetLines.none("reference certificate: its error at a set point is common to the UP and DOWN"
                 + " readings there and cancels in their difference, no contribution"));
-        lines.add(BudgetLines.resolution(context.readoutResolution(), out, Math.sqrt(2.0) * perOutput,
+        lines.add(BudgetLines.resolution(context, out, Math.sqrt(2.0) * perOutput,
                 ", two readings differenced: c = √2·100/FSO"));
+        lines.addAll(BudgetLines.readoutCancels(context, "hysteresis"));
+        lines.addAll(BudgetLines.excitation(context, "hysteresis", Double.NaN, 0));
         lines.addAll(BudgetLines.environment(context.environment(), "hysteresis", Double.NaN, 0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
         Judged judged = Judgement.judge(measured, tolerance, lines, policy);
@@ -223,7 +263,7 @@ final class StaticMetrics {
     }
 
     MetricResult repeatability(MetricAcceptance a) {
-        StaticCharacteristics sc = fit();
+        StaticCharacteristics sc = groupedFit();
         if (pooledRepeatability(sc).isEmpty()) {
             throw new UnevaluableException(
                     "no set point was read twice from the same direction yet (the repeat cycles are missing)");
@@ -238,7 +278,9 @@ final class StaticMetrics {
                 perOutput));
         lines.add(BudgetLines.none("reference certificate: its error at a set point is common to every cycle there"
                 + " and cancels in the scatter about the point's mean, no contribution"));
-        lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 100/FSO"));
+        lines.add(BudgetLines.resolution(context, out, perOutput, ": c = 100/FSO"));
+        lines.addAll(BudgetLines.readoutCancels(context, "repeatability"));
+        lines.addAll(BudgetLines.excitation(context, "repeatability", Double.NaN, 0));
         lines.addAll(BudgetLines.environment(context.environment(), "repeatability", Double.NaN, 0, Double.NaN, 0));
         Tolerance tolerance = Judgement.tolerance(a);
         Judged judged = Judgement.judge(measured, tolerance, lines, policy);
@@ -261,16 +303,18 @@ final class StaticMetrics {
             double error = (nominal.input(p.output()) - p.input()) / span * 100.0;
             double perOutput = 100.0 / (span * Math.abs(nominal.sensitivityAt(p.input())));
             List<UncertaintyContribution> lines = new ArrayList<>();
-            lines.add(pooledRepeatability(characteristics).isPresent()
+            lines.add(pooledRepeatability(groupedCharacteristics).isPresent()
                     ? BudgetLines.typeA("Type A: one reading, the pooled repeatability s_p, ν = "
-                            + characteristics.repeatabilityDegreesOfFreedom(),
-                            characteristics.repeatabilityStdDev().getAsDouble(),
-                            characteristics.repeatabilityDegreesOfFreedom(), perOutput)
+                            + groupedCharacteristics.repeatabilityDegreesOfFreedom(),
+                            groupedCharacteristics.repeatabilityStdDev().getAsDouble(),
+                            groupedCharacteristics.repeatabilityDegreesOfFreedom(), perOutput)
                     : BudgetLines.none("Type A: no set point read twice from one direction, scatter not evaluated"));
             lines.add(BudgetLines.reference(context.staticReference(), p.input(), in, 100.0 / span,
                     ", this reading's set point; a point error: c = 100/span"));
-            lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput,
+            lines.add(BudgetLines.resolution(context, out, perOutput,
                     ": c = 100/(span·S_nominal)"));
+            lines.addAll(BudgetLines.readout(context, p.output(), out, perOutput, ": c = 100/(span·S_nominal)"));
+            lines.addAll(BudgetLines.excitation(context, "accuracy", p.output(), perOutput));
             lines.addAll(BudgetLines.environment(context.environment(), "accuracy", p.output(), perOutput, nominalFso,
                     perOutput));
             Judged judged = Judgement.judge(error, tolerance, lines, policy);
@@ -310,15 +354,17 @@ final class StaticMetrics {
             Tolerance tolerance = Tolerance.between(-halfWidth, halfWidth);
             double perOutput = ohmPerOutput / curve.sensitivityOhmPerC(t);
             List<UncertaintyContribution> lines = new ArrayList<>();
-            lines.add(pooledRepeatability(characteristics).isPresent()
+            lines.add(pooledRepeatability(groupedCharacteristics).isPresent()
                     ? BudgetLines.typeA("Type A: one reading, the pooled repeatability s_p, ν = "
-                            + characteristics.repeatabilityDegreesOfFreedom(),
-                            characteristics.repeatabilityStdDev().getAsDouble(),
-                            characteristics.repeatabilityDegreesOfFreedom(), perOutput)
+                            + groupedCharacteristics.repeatabilityDegreesOfFreedom(),
+                            groupedCharacteristics.repeatabilityStdDev().getAsDouble(),
+                            groupedCharacteristics.repeatabilityDegreesOfFreedom(), perOutput)
                     : BudgetLines.none("Type A: single readings at each temperature, scatter not evaluated"));
             lines.add(BudgetLines.reference(context.staticReference(), p.input(), in, celsiusPerInput,
                     ", this reading's set point; a point error: c = 1 (the error is t(R) − t_reference)"));
-            lines.add(BudgetLines.resolution(context.readoutResolution(), out, perOutput, ": c = 1/(dR/dt)"));
+            lines.add(BudgetLines.resolution(context, out, perOutput, ": c = 1/(dR/dt)"));
+            lines.addAll(BudgetLines.readout(context, p.output(), out, perOutput, ": c = 1/(dR/dt)"));
+            lines.addAll(BudgetLines.excitation(context, "temperature error", p.output(), perOutput));
             lines.addAll(BudgetLines.environment(context.environment(), "temperature error", p.output(), perOutput,
                     fsoOhm / ohmPerOutput, perOutput));
             Judged judged = Judgement.judge(error, tolerance, lines, policy);
@@ -430,7 +476,7 @@ final class StaticMetrics {
     }
 
     private int count(double input, Direction direction) {
-        return (int) series.points().stream()
+        return (int) grouped.points().stream()
                 .filter(p -> p.input() == input && (direction == null || p.direction() == direction)).count();
     }
 

@@ -29,7 +29,11 @@ import org.dockgate.core.uncertainty.CoverageFactor;
  *
  * <p><b>Measured values</b> (the core's metrics; FSO = |b₁|·span of the measured fit, span = rangeMax − rangeMin):
  * <ul>
- *   <li>sensitivity b₁ and zero offset b₀: the least-squares line through all static readings
+ *   <li>inputs: each static reading's input is the value the reference applied (recorded beside the set point;
+ *       the set point when none was recorded). Fits, errors and tolerances use the applied value; the set point
+ *       only groups readings: for nonlinearity, hysteresis and repeatability each reading is referred to its set
+ *       point along the fitted slope, y − b₁·(x_applied − x_set) ({@link CalibrationPoint#reducedToNominal});</li>
+ *   <li>sensitivity b₁ and zero offset b₀: the least-squares line through all static readings at their applied inputs
  *       ({@link org.dockgate.core.fit.LineFit}), converted to the acceptance's unit;</li>
  *   <li>nonlinearity: best-fit or terminal per the specification, hysteresis, repeatability (pooled s_p), all
  *       in %FSO ({@link org.dockgate.core.metrics.StaticCharacteristics});</li>
@@ -61,7 +65,12 @@ import org.dockgate.core.uncertainty.CoverageFactor;
  *       hysteresis and repeatability (a common error at a set point cancels in differences there) and for noise
  *       (no stimulus at zero input);</li>
  *   <li>Type B from the readout's digit δ, rectangular with half-width δ/2 (GUM F.2.2.1), carried to the metric
- *       (1/√S_xx for the slope, √(1/n + x̄²/S_xx) for the offset, 100/FSO for %FSO figures, 1/S for input units);</li>
+ *       (1/√S_xx for the slope, √(1/n + x̄²/S_xx) for the offset, 100/FSO for %FSO figures, 1/S for input units);
+ *       δ is the register's resolution of the readout the readings name;</li>
+ *   <li>Type B from the readout's certificate U(y)/k at the reading ({@link ReadoutInstrument}): a scale error for the
+ *       slope (c = 1/x at the top reading), a point error for the offset, nonlinearity and accuracy, cancelling in
+ *       hysteresis and repeatability; from the excitation supply's u(V)/V ({@link ExcitationSupply}) a scale error
+ *       of the slope, offset and accuracy, or a line saying a ratiometric measurement cancels it;</li>
  *   <li>Type B from the environment when recorded with a temperature coefficient ({@link Environment}); a line
  *       of zero that says so otherwise.</li>
  * </ul>
@@ -136,9 +145,12 @@ public final class UnitEvaluation {
         if (accepted.stream().anyMatch(STATIC_METRICS::contains) && context.staticReference().isEmpty()) {
             missing.add("the static calibration's reference instrument and its certificate (U, k)");
         }
+        // Readings that name no readout (saved before readouts were recorded) are evaluated and say so in their
+        // budgets; a named readout without a resolution in the register leaves the result incomplete.
         if (accepted.stream().anyMatch(m -> STATIC_METRICS.contains(m) || NOISE_METRICS.contains(m))
-                && context.readoutResolution().isEmpty()) {
-            missing.add("the readout's resolution (the digit of the indicating instrument)");
+                && context.readoutResolution().isEmpty() && !context.readoutNotRecorded()) {
+            missing.add(context.readout().map(r -> "the resolution of readout " + r.name() + " (enter it in the"
+                    + " register)").orElse("the readout's resolution (the digit of the indicating instrument)"));
         }
         if (accepted.stream().anyMatch(SWEEP_METRICS::contains) && context.sweepReference().isEmpty()) {
             missing.add("the frequency sweep's reference instrument and its certificate (U, k)");
@@ -178,7 +190,10 @@ public final class UnitEvaluation {
         return Character.toUpperCase(words.charAt(0)) + words.substring(1);
     }
 
-    /** Replaces an input within {@link #SET_POINT_TOLERANCE_OF_SPAN} of a planned set point by the set point. */
+    /**
+     * Replaces a nominal within {@link #SET_POINT_TOLERANCE_OF_SPAN} of a planned set point by the set point (and
+     * the input with it when the reading was taken at its set point; an applied value off the set point stays).
+     */
     static List<CalibrationPoint> snapToSetPoints(SensorSpecification spec, StaticCalibration plan,
             List<CalibrationPoint> points) {
         if (plan == null || plan.pointsInput().isEmpty()) {
@@ -187,14 +202,16 @@ public final class UnitEvaluation {
         double tolerance = SET_POINT_TOLERANCE_OF_SPAN * spec.span();
         List<CalibrationPoint> snapped = new ArrayList<>(points.size());
         for (CalibrationPoint p : points) {
-            double input = p.input();
+            double nominal = p.nominal();
             for (double planned : plan.pointsInput()) {
-                if (Math.abs(input - planned) <= tolerance) {
-                    input = planned;
+                if (Math.abs(nominal - planned) <= tolerance) {
+                    nominal = planned;
                     break;
                 }
             }
-            snapped.add(input == p.input() ? p : new CalibrationPoint(input, p.output(), p.direction(), p.cycle()));
+            double input = p.offNominal() ? p.input() : nominal;
+            snapped.add(nominal == p.nominal() ? p
+                    : new CalibrationPoint(input, p.output(), p.direction(), p.cycle(), nominal));
         }
         return snapped;
     }
@@ -210,7 +227,7 @@ public final class UnitEvaluation {
         }
         Set<String> taken = new HashSet<>();
         for (CalibrationPoint p : snapped) {
-            taken.add(key(p.input(), p.direction(), p.cycle()));
+            taken.add(key(p.nominal(), p.direction(), p.cycle()));
         }
         List<String> gaps = new ArrayList<>();
         int count = 0;

@@ -17,8 +17,9 @@ import org.dockgate.core.series.Direction;
  * <p>Units: static inputs are in the specification's input unit and outputs (static readings and noise
  * samples) in its output unit; frequencies in hertz, sweep amplitudes in any one unit (only their ratios
  * are used). The data-acquisition parser ({@code org.dockgate.core.acquisition}) converts to these units.
- * Static inputs are the nominal set points of the procedure (a reading within 10⁻⁶ of the span of a planned
- * point counts for it, which absorbs unit-conversion rounding).
+ * Static inputs are the values the reference applied and each reading's nominal is the procedure's set point
+ * it belongs to (a nominal within 10⁻⁶ of the span of a planned point counts for it, which absorbs
+ * unit-conversion rounding); see {@link CalibrationPoint}.
  *
  * @param staticPoints     static readings (input, output, direction, cycle ≥ 1), in the order taken
  * @param noiseSamples     output samples at zero input, in the order taken
@@ -87,6 +88,12 @@ public record UnitMeasurements(List<CalibrationPoint> staticPoints, List<Double>
         /** Adds a static reading. */
         public Builder staticReading(double input, double output, Direction direction, int cycle) {
             statics.add(new CalibrationPoint(input, output, direction, cycle));
+            return this;
+        }
+
+        /** Adds a static reading whose applied input differs from its nominal set point. */
+        public Builder staticReading(double applied, double output, Direction direction, int cycle, double nominal) {
+            statics.add(new CalibrationPoint(applied, output, direction, cycle, nominal));
             return this;
         }
 

@@ -289,8 +289,15 @@ public final class ProcedureDerivation {
                 + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit() + ") with the smallest uncertainty.").orElse(
                 "No reference instrument in calibration covers " + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit()
                         + "." + outOfRange(candidates, TestKind.STATIC_CALIBRATION, inputs, spec.inputUnit())));
+        why.add("Instruments per reading: " + spec.kind().instrumentRoles().entrySet().stream()
+                .map(e -> e.getKey().name().toLowerCase(java.util.Locale.ROOT) + " — " + e.getValue())
+                .collect(java.util.stream.Collectors.joining("; ")) + "; each in calibration when the reading is taken.");
+        double window = StaticCalibration.defaultAppliedWindow(spec);
+        why.add("The value the reference applies may lie within ±" + fmt(window) + " " + spec.inputUnit()
+                + " of each set point (" + (spec.kind() == SensorKind.RTD || spec.kind() == SensorKind.THERMOCOUPLE
+                ? "±0.5 °C for a dry block or bath" : "±1 % of the span") + "); the evaluation uses the applied value.");
         return new StaticCalibration(percent, inputs, spec.inputUnit(), directions, cycles, spec.kind().settleSeconds(),
-                ref.map(ReferenceCandidate::identifier).orElse(null), why);
+                ref.map(ReferenceCandidate::identifier).orElse(null), why, window);
     }
 
     static NoiseCapture noiseCapture(SensorSpecification spec) {

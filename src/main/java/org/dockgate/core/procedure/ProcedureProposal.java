@@ -44,14 +44,63 @@ public record ProcedureProposal(StaticCalibration staticCalibration, NoiseCaptur
     }
 
     /** Test points in the input unit, visited in order for each cycle. */
+    /**
+     * The static calibration's plan.
+     *
+     * @param appliedWindow how far (±, in the input unit) the value the reference actually applied may lie from
+     *                      its set point; null in procedures approved before it was a parameter, which then use
+     *                      {@link #defaultAppliedWindow}
+     */
     public record StaticCalibration(List<Double> pointsPercentOfSpan, List<Double> pointsInput, String inputUnit,
                                     List<Direction> directions, int cycles, int settleSeconds,
-                                    String referenceInstrument, List<String> reasoning) {
+                                    String referenceInstrument, List<String> reasoning, Double appliedWindow) {
         public StaticCalibration {
             pointsPercentOfSpan = List.copyOf(pointsPercentOfSpan);
             pointsInput = List.copyOf(pointsInput);
             directions = List.copyOf(directions);
             reasoning = List.copyOf(reasoning);
+            if (appliedWindow != null && !(appliedWindow > 0 && Double.isFinite(appliedWindow))) {
+                throw new IllegalArgumentException("The window for applied values must be a positive number, got "
+                        + appliedWindow);
+            }
+        }
+
+        /** A plan without its own window for applied values (the default of the sensor kind applies). */
+        public StaticCalibration(List<Double> pointsPercentOfSpan, List<Double> pointsInput, String inputUnit,
+                                 List<Direction> directions, int cycles, int settleSeconds,
+                                 String referenceInstrument, List<String> reasoning) {
+            this(pointsPercentOfSpan, pointsInput, inputUnit, directions, cycles, settleSeconds, referenceInstrument,
+                    reasoning, null);
+        }
+
+        /** @return this plan with another window for applied values (± input units) */
+        public StaticCalibration withAppliedWindow(double window) {
+            return new StaticCalibration(pointsPercentOfSpan, pointsInput, inputUnit, directions, cycles,
+                    settleSeconds, referenceInstrument, reasoning, window);
+        }
+
+        /** @return the window for applied values: the plan's own, else the default for the specification */
+        public double appliedWindowFor(SensorSpecification spec) {
+            return appliedWindow != null ? appliedWindow : defaultAppliedWindow(spec);
+        }
+
+        /**
+         * The default window between the applied value and its set point (common practice of the lab, stated in
+         * every procedure): ±0.5 °C for a temperature sensor in a dry block or bath (a block settles within a few
+         * tenths of a degree of its set point), else ±1 % of the span (a pressure controller, dead-weight set or
+         * load frame lands within a fraction of a percent).
+         *
+         * @param spec the specification
+         * @return the window in the specification's input unit, &gt; 0
+         */
+        public static double defaultAppliedWindow(SensorSpecification spec) {
+            if (spec.kind() == SensorKind.RTD || spec.kind() == SensorKind.THERMOCOUPLE) {
+                // a temperature difference: the size of one kelvin in the input unit
+                double kelvin = org.dockgate.core.quantity.Units.convert(1.0, "K", spec.inputUnit())
+                        - org.dockgate.core.quantity.Units.convert(0.0, "K", spec.inputUnit());
+                return 0.5 * Math.abs(kelvin);
+            }
+            return 0.01 * spec.span();
         }
 
         public int readingsPerUnit() {

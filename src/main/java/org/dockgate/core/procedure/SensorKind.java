@@ -34,6 +34,45 @@ public enum SensorKind {
         return settleSeconds;
     }
 
+    /** The instrument roles of a measurement chain. */
+    public enum InstrumentRole {
+        /** The reference that applies the input (pressure standard, shaker system, load frame, dry block). */
+        STIMULUS,
+        /** The instrument that reads the sensor's output (multimeter, DAQ channel, resistance bridge). */
+        READOUT,
+        /** The supply that excites the sensor (bridge supply; an RTD's measuring current comes from its readout). */
+        EXCITATION
+    }
+
+    /**
+     * The instruments each static test needs, by role, in the words a procedure uses (common practice of test
+     * labs): every kind needs its stimulus reference and a readout; a bridge sensor (pressure transducer, load
+     * cell) needs its excitation supply; an RTD's measuring current comes from the readout or bridge; an IEPE
+     * accelerometer's constant-current supply is not modelled.
+     *
+     * @return role → what serves in it, in order
+     */
+    public java.util.Map<InstrumentRole, String> instrumentRoles() {
+        java.util.Map<InstrumentRole, String> roles = new java.util.EnumMap<>(InstrumentRole.class);
+        roles.put(InstrumentRole.STIMULUS, switch (this) {
+            case PRESSURE_TRANSDUCER -> "pressure standard (piston gauge or pressure controller)";
+            case ACCELEROMETER -> "reference accelerometer or shaker system";
+            case LOAD_CELL -> "load frame with its reference load cell";
+            case RTD, THERMOCOUPLE -> "dry block or bath with its reference thermometer";
+            case LIGHT_SENSOR -> "reference lamp and photometer";
+            case OTHER -> "the stimulus reference";
+        });
+        roles.put(InstrumentRole.READOUT, switch (this) {
+            case RTD -> "resistance bridge or multimeter (4-wire), which also supplies the measuring current";
+            case LOAD_CELL -> "ratiometric bridge indicator or DAQ channel";
+            default -> "multimeter or DAQ channel";
+        });
+        if (this == PRESSURE_TRANSDUCER || this == LOAD_CELL) {
+            roles.put(InstrumentRole.EXCITATION, "excitation supply (a ratiometric readout cancels its error)");
+        }
+        return roles;
+    }
+
     /**
      * Safety cautions for the bench, by kind (common practice of test labs). Every procedure also
      * says that local codes and the lab's own safety rules govern.

@@ -119,7 +119,9 @@ class InstrumentsApiController {
             @Schema(description = "The smallest U anywhere in the range, in the range unit, > 0: U(x) = max(floor,"
                     + " band figure). Omitted: derived, the percent-of-reading figure at 10 % of full scale",
                     example = "0.0002") Double uncertaintyFloor,
-            List<BandDto> bands) {
+            List<BandDto> bands,
+            @Schema(description = "For a readout (multimeter, DAQ, bridge): its resolution in the range unit, the"
+                    + " digit of the range used; optional", example = "0.000001") Double resolution) {
     }
 
     @Schema(description = "A new calibration (new certificate) of an instrument; earlier records are kept."
@@ -172,13 +174,16 @@ class InstrumentsApiController {
                               @Schema(description = "The due date, when EXPIRED; else null") LocalDate expiredSince,
                               @Schema(description = "May be chosen for a test today (not EXPIRED)") boolean selectable,
                               LocalDate asOf, long version, CalibrationResponse current,
-                              List<CalibrationResponse> calibrations) {
+                              List<CalibrationResponse> calibrations,
+                              @Schema(description = "A readout's resolution in the range unit; null when not recorded")
+                              Double resolution) {
         static InstrumentResponse of(InstrumentView v) {
             return new InstrumentResponse(v.identifier(), v.description(), v.quantity(),
                     ApiNumbers.finiteOrNull(v.rangeMin()), ApiNumbers.finiteOrNull(v.rangeMax()), v.unit(),
                     v.status(), v.dueSoon(), v.daysUntilDue(), v.expiredSince().orElse(null), v.selectable(),
                     v.asOf(), v.version(), CalibrationResponse.of(v, v.current()),
-                    v.calibrations().stream().map(c -> CalibrationResponse.of(v, c)).toList());
+                    v.calibrations().stream().map(c -> CalibrationResponse.of(v, c)).toList(),
+                    v.resolution().isPresent() ? v.resolution().getAsDouble() : null);
         }
     }
 
@@ -225,7 +230,7 @@ class InstrumentsApiController {
                 request.dueOn(), request.coverageFactor(), request.expandedUncertainty(), request.uncertaintyMode(),
                 request.bands(), max).over(request.calibratedMin(), request.calibratedMax(), request.uncertaintyFloor());
         InstrumentView created = instruments.create(new NewInstrument(request.identifier(), request.description(),
-                request.quantity(), min, max, request.unit(), calibration));
+                request.quantity(), min, max, request.unit(), calibration, request.resolution()));
         return ResponseEntity.created(URI.create("/api/v1/reference-instruments/" + created.identifier()))
                 .body(InstrumentResponse.of(created));
     }

@@ -340,7 +340,10 @@ public class ProcedurePdf {
                 put(statics.pointsInput().size() + " points, " + directionsInWords(statics.directions())
                         + ", " + statics.cycles() + (statics.cycles() == 1 ? " cycle" : " cycles") + "; let each point"
                         + " settle " + statics.settleSeconds() + " s before reading; " + statics.readingsPerUnit()
-                        + " readings per unit. Reference: " + orNone(statics.referenceInstrument()) + ".", body, 0, 4);
+                        + " readings per unit. Reference: " + orNone(statics.referenceInstrument()) + "."
+                        + (statics.appliedWindow() == null ? "" : " Record the value the reference applied at each point;"
+                        + " it must lie within ±" + trimNumber(statics.appliedWindow()) + " " + statics.inputUnit()
+                        + " of the set point."), body, 0, 4);
                 PdfPTable table = table(new float[] {10, 10, 18, 22, 40},
                         "Step", "Cycle", "Direction", "Point (% of span)", "Input value (" + statics.inputUnit() + ")");
                 int step = 0;
@@ -719,5 +722,9 @@ public class ProcedurePdf {
             cb.showTextAligned(alignRight ? Element.ALIGN_RIGHT : Element.ALIGN_LEFT, text, x, y, 0);
             cb.endText();
         }
+    }
+
+    private static String trimNumber(double v) {
+        return java.math.BigDecimal.valueOf(v).round(new java.math.MathContext(6)).stripTrailingZeros().toPlainString();
     }
 }

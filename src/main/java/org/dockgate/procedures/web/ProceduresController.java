@@ -131,7 +131,7 @@ class ProceduresController {
     /** For the edit form's field list. */
     static final class ProcedureFields {
         static final List<String> EDITABLE = List.of("static.points", "static.cycles", "static.settleSeconds",
-                "static.instrument", "noise.samples", "noise.sampleRateHz", "sweep.frequencies", "sweep.instrument",
+                "static.appliedWindow", "static.instrument", "noise.samples", "noise.sampleRateHz", "sweep.frequencies", "sweep.instrument",
                 "benchMinutes");
     }
 }
