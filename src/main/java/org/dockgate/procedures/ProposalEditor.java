@@ -15,6 +15,7 @@ import org.dockgate.core.procedure.ProcedureProposal.MetricAcceptance;
 import org.dockgate.core.procedure.ProcedureProposal.NoiseCapture;
 import org.dockgate.core.procedure.ProcedureProposal.StaticCalibration;
 import org.dockgate.core.procedure.SensorSpecification;
+import org.dockgate.platform.RefusedField;
 
 /**
  * Applies an engineer's edits to a derived proposal. Each editable value has a key; a value that breaks
@@ -67,6 +68,18 @@ final class ProposalEditor {
         boolean limitsEdited = false;
         for (var e : overrides.entrySet()) {
             String key = e.getKey();
+            String field = "overrides." + key;
+            if (!FIELDS.containsKey(key)) {
+                try {
+                    requireKnown(key);
+                } catch (IllegalArgumentException unknown) {
+                    throw new RefusedField(field, unknown.getMessage());
+                }
+            }
+            if (e.getValue() == null) {
+                throw new RefusedField(field, "The override '" + key + "' (" + field + ") has no value: give it as"
+                        + " text, e.g. \"" + key + "\": \"" + example(key) + "\", or leave it out to keep the proposed value.");
+            }
             String value = e.getValue().trim();
             switch (key) {
                 case "static.points" -> {
@@ -141,7 +154,7 @@ final class ProposalEditor {
                 default -> {
                     String[] parts = key.split("\\.");
                     Metric metric = Metric.valueOf(parts[1]);
-                    double limit = Double.parseDouble(value);
+                    double limit = finite(value, key);
                     int index = -1;
                     for (int i = 0; i < acceptance.size(); i++) {
                         if (acceptance.get(i).metric() == metric) {
@@ -168,6 +181,26 @@ final class ProposalEditor {
         return new ProcedureProposal(s, n, f, acceptance, p.sampling(),
                 limitsEdited ? ProcedureDerivation.environment(limits) : p.environment(), p.cautions(), minutes,
                 p.reasoning(), limits);
+    }
+
+    private static String example(String key) {
+        return switch (key) {
+            case "static.points", "sweep.frequencies" -> "10, 20, 50";
+            case "static.instrument", "sweep.instrument" -> "RI-PRS-01";
+            default -> "3";
+        };
+    }
+
+    private static double finite(String value, String key) {
+        try {
+            double v = Double.parseDouble(value);
+            if (!Double.isFinite(v)) {
+                throw new NumberFormatException();
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("'" + value + "' is not a number (" + key + ").");
+        }
     }
 
     private static void require(boolean condition, String message) {

@@ -3,6 +3,7 @@ package org.dockgate.web;
 import jakarta.validation.ConstraintViolationException;
 import java.util.stream.Collectors;
 import org.dockgate.core.UnevaluableException;
+import org.dockgate.platform.RefusedField;
 import org.slf4j.Logger;
 import org.slf4j.LoggerFactory;
 import org.springframework.core.Ordered;
@@ -14,15 +15,18 @@ import org.springframework.http.ProblemDetail;
 import org.springframework.http.ResponseEntity;
 import org.springframework.http.converter.HttpMessageNotReadableException;
 import org.springframework.security.access.AccessDeniedException;
+import org.springframework.web.HttpMediaTypeNotAcceptableException;
 import org.springframework.web.HttpMediaTypeNotSupportedException;
 import org.springframework.web.HttpRequestMethodNotSupportedException;
 import org.springframework.web.bind.MethodArgumentNotValidException;
 import org.springframework.web.bind.MissingServletRequestParameterException;
+import org.springframework.web.bind.ServletRequestBindingException;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.bind.annotation.RestController;
 import org.springframework.web.bind.annotation.RestControllerAdvice;
 import org.springframework.web.method.annotation.MethodArgumentTypeMismatchException;
 import org.springframework.web.multipart.MaxUploadSizeExceededException;
+import org.springframework.web.multipart.MultipartException;
 import org.springframework.web.multipart.support.MissingServletRequestPartException;
 
 /**
@@ -49,7 +53,11 @@ public class ApiExceptionHandler {
 
     @ExceptionHandler(IllegalArgumentException.class)
     ResponseEntity<ProblemDetail> malformed(IllegalArgumentException e) {
-        return problem(HttpStatus.BAD_REQUEST, e.getMessage());
+        ResponseEntity<ProblemDetail> answer = problem(HttpStatus.BAD_REQUEST, e.getMessage());
+        if (e instanceof RefusedField refused && refused.field() != null) {
+            answer.getBody().setProperty("field", refused.field());
+        }
+        return answer;
     }
 
     @ExceptionHandler(HttpMessageNotReadableException.class)
@@ -59,7 +67,13 @@ public class ApiExceptionHandler {
                 return bodyTooLarge(tooLarge);
             }
         }
-        return problem(HttpStatus.BAD_REQUEST, JsonProblems.describe(e));
+        JsonProblems.Refusal refusal = JsonProblems.describe(e);
+        ResponseEntity<ProblemDetail> answer = problem(HttpStatus.BAD_REQUEST, refusal.detail());
+        if (refusal.field() != null) {
+            answer.getBody().setProperty("field", refusal.field());
+            answer.getBody().setProperty("pointer", refusal.pointer());
+        }
+        return answer;
     }
 
     @ExceptionHandler(MethodArgumentTypeMismatchException.class)
@@ -77,6 +91,17 @@ public class ApiExceptionHandler {
     @ExceptionHandler(MissingServletRequestPartException.class)
     ResponseEntity<ProblemDetail> missingPart(MissingServletRequestPartException e) {
         return problem(HttpStatus.BAD_REQUEST, "The upload part '" + e.getRequestPartName() + "' is required.");
+    }
+
+    /** Not a multipart request, a multipart request without a boundary, or a part that cannot be read. */
+    @ExceptionHandler(MultipartException.class)
+    ResponseEntity<ProblemDetail> notMultipart(MultipartException e) {
+        return problem(HttpStatus.BAD_REQUEST, UploadLimitAdvice.NOT_AN_UPLOAD);
+    }
+
+    @ExceptionHandler(ServletRequestBindingException.class)
+    ResponseEntity<ProblemDetail> binding(ServletRequestBindingException e) {
+        return problem(HttpStatus.BAD_REQUEST, "The request is incomplete: a required header or path part is missing.");
     }
 
     @ExceptionHandler(MethodArgumentNotValidException.class)
@@ -115,6 +140,12 @@ public class ApiExceptionHandler {
                 "Send the request body as " + e.getSupportedMediaTypes() + ".");
     }
 
+    @ExceptionHandler(HttpMediaTypeNotAcceptableException.class)
+    ResponseEntity<ProblemDetail> notAcceptable(HttpMediaTypeNotAcceptableException e) {
+        return problem(HttpStatus.NOT_ACCEPTABLE, "This address answers JSON; send an Accept header that allows"
+                + " application/json.");
+    }
+
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     ResponseEntity<ProblemDetail> tooLarge(MaxUploadSizeExceededException e) {
         return problem(HttpStatus.CONTENT_TOO_LARGE, "The upload is larger than the server accepts.");
@@ -139,6 +170,11 @@ public class ApiExceptionHandler {
     }
 
     static ResponseEntity<ProblemDetail> problem(HttpStatus status, String detail) {
+        if (JsonProblems.technical(detail)) {
+            // A message written for programmers (a Java type or package) never reaches the client.
+            log.warn("Technical refusal message replaced in a {} answer: {}", status.value(), detail);
+            detail = "The request has a value Dockgate cannot accept; check the fields against the API documentation.";
+        }
         ProblemDetail body = ProblemDetail.forStatusAndDetail(status, detail);
         return ResponseEntity.status(status).contentType(PROBLEM).body(body);
     }

@@ -19,10 +19,10 @@ public final class ApiNumbers {
     /** Refuses NaN and infinities in a request with a message naming the field. */
     public static double requireFinite(Double value, String field) {
         if (value == null) {
-            throw new IllegalArgumentException("'" + field + "' is required.");
+            throw new org.dockgate.platform.RefusedField(field, "'" + field + "' is required.");
         }
         if (!Double.isFinite(value)) {
-            throw new IllegalArgumentException("'" + field + "' must be a finite number.");
+            throw new org.dockgate.platform.RefusedField(field, "'" + field + "' must be a finite number.");
         }
         return value;
     }

@@ -2,6 +2,8 @@ package org.dockgate.web;
 
 import jakarta.servlet.http.HttpServletRequest;
 import java.util.Locale;
+import org.slf4j.Logger;
+import org.slf4j.LoggerFactory;
 import org.springframework.beans.factory.annotation.Value;
 import org.springframework.core.Ordered;
 import org.springframework.core.annotation.Order;
@@ -12,6 +14,7 @@ import org.springframework.util.unit.DataSize;
 import org.springframework.web.bind.annotation.ControllerAdvice;
 import org.springframework.web.bind.annotation.ExceptionHandler;
 import org.springframework.web.multipart.MaxUploadSizeExceededException;
+import org.springframework.web.multipart.MultipartException;
 import org.springframework.web.servlet.ModelAndView;
 
 /**
@@ -22,6 +25,13 @@ import org.springframework.web.servlet.ModelAndView;
 @ControllerAdvice
 @Order(Ordered.HIGHEST_PRECEDENCE)
 class UploadLimitAdvice {
+
+    /** The answer to a POST that is not a readable file upload (the same words for pages and problem documents). */
+    static final String NOT_AN_UPLOAD = "This address takes a file upload: send the file as multipart/form-data"
+            + " (with its boundary) in a part named 'file', with a file name without control characters."
+            + " Nothing was saved.";
+
+    private static final Logger log = LoggerFactory.getLogger(UploadLimitAdvice.class);
 
     private final DataSize limit;
 
@@ -49,16 +59,31 @@ class UploadLimitAdvice {
 
     @ExceptionHandler(MaxUploadSizeExceededException.class)
     Object tooLarge(MaxUploadSizeExceededException e, HttpServletRequest request) {
+        return answer(request, HttpStatus.CONTENT_TOO_LARGE, message());
+    }
+
+    /**
+     * Not multipart at all, multipart without a boundary, or a part the container cannot parse (a file
+     * name with a NUL character): the request is refused, never a 500.
+     */
+    @ExceptionHandler(MultipartException.class)
+    Object notAnUpload(MultipartException e, HttpServletRequest request) {
+        log.debug("Upload refused: {}", e.getMessage());
+        return answer(request, HttpStatus.BAD_REQUEST, NOT_AN_UPLOAD);
+    }
+
+    /** A problem document for the API and for script calls, a page for a form post. */
+    private static Object answer(HttpServletRequest request, HttpStatus status, String message) {
         String path = request.getRequestURI().substring(request.getContextPath().length());
         String accept = request.getHeader("Accept");
         boolean wantsPage = accept != null && accept.contains("text/html") && !path.startsWith("/api/");
         if (!wantsPage) {
-            return ApiExceptionHandler.problem(HttpStatus.CONTENT_TOO_LARGE, message());
+            return ApiExceptionHandler.problem(status, message);
         }
         ModelAndView page = new ModelAndView("error/400");
-        page.setStatus(HttpStatus.CONTENT_TOO_LARGE);
-        page.addObject("status", 413);
-        page.addObject("message", message());
+        page.setStatus(status);
+        page.addObject("status", status.value());
+        page.addObject("message", message);
         return page;
     }
 }

@@ -45,12 +45,21 @@ class BenchPageApi {
             throw new IllegalArgumentException("Nothing to save.");
         }
         ValueText v = ValueText.parse(body.text());
-        Direction d = body.direction() == null || body.direction().isBlank() ? null : Direction.valueOf(body.direction());
+        Direction d = body.direction() == null || body.direction().isBlank() ? null : direction(body.direction());
         Reading saved = bench.record(lotId, new NewReading(body.serial(), ReadingTest.of(body.test()), body.point(), d,
                 body.cycle(), v.value(), v.unit(), body.instrument(), body.clientToken(),
                 body.applied() == null || body.applied().isBlank() ? null : BenchController.appliedNumber(body.applied()),
                 body.readout(), body.excitation()));
         return ResponseEntity.status(HttpStatus.CREATED).body(ReadingResponse.of(saved));
+    }
+
+    private static Direction direction(String text) {
+        try {
+            return Direction.valueOf(text.trim().toUpperCase(java.util.Locale.ROOT));
+        } catch (IllegalArgumentException e) {
+            throw new org.dockgate.platform.RefusedField("direction", "'direction' must be UP or DOWN (or empty for noise and"
+                    + " sweep readings), not '" + text + "'.");
+        }
     }
 
     @PostMapping(path = "/bench/lots/{lotId}/import-jobs", produces = MediaType.APPLICATION_JSON_VALUE)

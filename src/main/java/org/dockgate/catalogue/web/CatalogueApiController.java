@@ -57,6 +57,9 @@ class CatalogueApiController {
     @GetMapping("/api/v1/sensor-models/{id}/revisions")
     @Operation(summary = "All specification revisions of a model, newest first")
     List<SpecificationRevision> revisions(@PathVariable long id) {
+        if (catalogue.model(id).isEmpty()) {
+            throw org.dockgate.web.NotFoundException.of("There is no sensor model " + id + ".").get();
+        }
         return catalogue.revisions(id);
     }
 

@@ -80,9 +80,12 @@ record SpecificationForm(String partNumber, String name, String kind, String mea
         Double sNom = number(sensitivityNominal, "sensitivityNominal", false, problems);
         if (sNom != null) {
             Double tol = number(sensitivityTolerance, "sensitivityTolerance", true, problems);
-            required(sensitivityUnit, "sensitivityUnit", problems);
+            if (blank(sensitivityUnit)) {
+                problems.byField.putIfAbsent("sensitivityUnit",
+                        "Enter the unit of the sensitivity (e.g. mV/V), or clear the nominal sensitivity.");
+            }
             ToleranceMode mode = choice(ToleranceMode.class, sensitivityToleranceMode, "sensitivityToleranceMode", problems);
-            if (tol != null && mode != null) {
+            if (tol != null && mode != null && !blank(sensitivityUnit)) {
                 sensitivity = new Sensitivity(sNom, sensitivityUnit.trim(), tol, mode);
             }
         }
