@@ -100,6 +100,7 @@ class LotCertificateRenderer {
         boolean accepted = lot.state() == LotState.DISPOSITIONED_ACCEPTED;
         Map<String, String> decision = new LinkedHashMap<>();
         decision.put("Nonconforming units", ev.nonconforming() + " of " + plan.sampleSize());
+        decision.put("Conditional results", ev.procedure().settings().conditionalCounting().inWords());
         decision.put("Decision", accepted ? "ACCEPTED (d ≤ Ac)" : "REJECTED (d ≥ Re)");
         ev.nonconformance().ifPresent(n -> {
             decision.put("Nonconformance report", n.number());
