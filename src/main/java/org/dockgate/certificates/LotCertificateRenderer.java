@@ -283,6 +283,7 @@ class LotCertificateRenderer {
         var plan = ev.lot().plan();
         Map<String, String> decision = new LinkedHashMap<>();
         decision.put("Nonconforming units", ev.nonconforming() + " of " + plan.sampleSize());
+        decision.put("Conditional results", ev.procedure().settings().conditionalCounting().inWords());
         switch (outcome) {
             case ACCEPTED -> {
                 decision.put("Decision", "ACCEPTED (d ≤ Ac)");

@@ -13,6 +13,7 @@ import org.dockgate.core.procedure.SensorSpecification.NoiseFloor;
 import org.dockgate.core.procedure.SensorSpecification.NonlinearityReference;
 import org.dockgate.core.procedure.SensorSpecification.Referred;
 import org.dockgate.core.procedure.SensorSpecification.RtdClass;
+import org.dockgate.core.rtd.RtdConstruction;
 import org.dockgate.core.procedure.SensorSpecification.Sensitivity;
 import org.dockgate.core.procedure.SensorSpecification.ToleranceMode;
 import org.dockgate.core.procedure.SensorSpecification.ZeroOffset;
@@ -84,7 +85,8 @@ class DemoCatalogue implements DemoStep {
                 metrics.has("resolution") ? metrics.get("resolution").get("limit").asDouble() : null,
                 b == null ? null : new Bandwidth(number(b, "minus3dBHz"), number(b, "flatnessPercent"), number(b, "upToHz"),
                         number(b, "referenceHz")),
-                r == null ? null : new RtdClass(r.get("r0Ohm").asDouble(), r.get("toleranceClass").asString()));
+                r == null ? null : new RtdClass(r.get("r0Ohm").asDouble(), r.get("toleranceClass").asString(),
+                        r.has("construction") ? RtdConstruction.parse(r.get("construction").asString()) : null));
     }
 
     private static Double limit(JsonNode metrics, String name) {

@@ -169,8 +169,10 @@ public class EvaluationService {
     private LotEvaluationView lotView(LotView lot, ApprovedProcedure procedure, List<UnitEvaluationView> units) {
         long lotId = lot.id();
         boolean complete = units.stream().allMatch(UnitEvaluationView::complete);
+        // The procedure revision's own counting of conditional verdicts (a setting since V10_9; DEFAULT before).
+        ConditionalCounting counting = procedure.settings().conditionalCounting();
         int nonconforming = LotTally.count(units.stream().map(u -> u.result().unitVerdict().orElse(Verdict.PASS)).toList(),
-                ConditionalCounting.DEFAULT);
+                counting);
         Optional<Boolean> wouldAccept = complete
                 ? Optional.of(SingleSamplingPlans.disposition(lot.plan().plan(), nonconforming).accepted())
                 : Optional.empty();

@@ -54,7 +54,10 @@ public class ProcedureDocuments {
                 revision.revisionNo(), revision.status(), revision.partNumber(), model.name(),
                 model.kind().name().toLowerCase().replace('_', ' '),
                 revision.partNumber() + " rev " + revision.specificationRevisionNo(), revision.settings().aql().label(),
-                revision.settings().level().name(), revision.settings().ruleInWords(), revision.content(), refs,
+                revision.settings().level().name(),
+                // The counting of conditional results changes lot decisions, so the procedure states it with the rule.
+                revision.settings().ruleInWords() + " " + revision.settings().conditionalCounting().inWords(),
+                revision.content(), refs,
                 Optional.ofNullable(revision.justification()), name(revision.author()),
                 Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history));
     }

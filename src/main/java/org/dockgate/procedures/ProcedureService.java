@@ -18,6 +18,7 @@ import org.dockgate.audit.AuditEvent.FieldChange;
 import org.dockgate.catalogue.CatalogueService;
 import org.dockgate.catalogue.SpecificationRevision;
 import org.dockgate.core.decision.DecisionRule;
+import org.dockgate.core.evaluation.ConditionalCounting;
 import org.dockgate.core.procedure.DerivationOptions;
 import org.dockgate.core.procedure.ProcedureDerivation;
 import org.dockgate.core.procedure.ProcedureProposal;
@@ -127,7 +128,8 @@ public class ProcedureService {
         jdbc.update(con -> {
             var ps = con.prepareStatement("insert into procedure_draft (model_id, specification_revision_id, aql,"
                     + " inspection_level, decision_rule, guard_band_factor, max_false_accept_risk, overrides_json, author,"
-                    + " created_at, status, version) values (?, ?, ?, ?, ?, ?, ?, '{}', ?, ?, 'OPEN', 0)", new String[] {"id"});
+                    + " created_at, status, version, conditional_counting) values (?, ?, ?, ?, ?, ?, ?, '{}', ?, ?, 'OPEN', 0, ?)",
+                    new String[] {"id"});
             ps.setLong(1, revision.modelId());
             ps.setLong(2, specificationRevisionId);
             ps.setString(3, settings.aql().name());
@@ -137,13 +139,15 @@ public class ProcedureService {
             ps.setDouble(7, settings.maxFalseAcceptRisk());
             ps.setString(8, CurrentActor.username());
             ps.setObject(9, now());
+            ps.setString(10, settings.conditionalCounting().key());
             return ps;
         }, keys);
         long id = keys.getKey().longValue();
         events.publishEvent(AuditEvent.of("PROCEDURE_DRAFT", id, "CREATE", "Procedure draft for " + revision.label())
                 .withChanges(List.of(FieldChange.of("specificationRevision", null, revision.label()),
                         FieldChange.of("aql", null, settings.aql().label()), FieldChange.of("level", null, settings.level()),
-                        FieldChange.of("decisionRule", null, settings.rule()))));
+                        FieldChange.of("decisionRule", null, settings.rule()),
+                        FieldChange.of("conditionalCounting", null, settings.conditionalCounting().key()))));
         return id;
     }
 
@@ -255,8 +259,8 @@ public class ProcedureService {
         jdbc.update(con -> {
             var ps = con.prepareStatement("insert into procedure_revision (model_id, specification_revision_id, draft_id,"
                     + " revision_no, aql, inspection_level, decision_rule, guard_band_factor, max_false_accept_risk,"
-                    + " content_json, justification, author, approved_by, approved_at) values"
-                    + " (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", new String[] {"id"});
+                    + " content_json, justification, author, approved_by, approved_at, conditional_counting) values"
+                    + " (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", new String[] {"id"});
             ps.setLong(1, draft.modelId());
             ps.setLong(2, draft.specificationRevisionId());
             ps.setLong(3, draftId);
@@ -271,6 +275,7 @@ public class ProcedureService {
             ps.setString(12, draft.author());
             ps.setString(13, approver);
             ps.setObject(14, now());
+            ps.setString(15, s.conditionalCounting().key());
             return ps;
         }, keys);
         long revisionId = keys.getKey().longValue();
@@ -360,7 +365,8 @@ public class ProcedureService {
     private static ProcedureSettings settings(Map<String, Object> r) {
         return new ProcedureSettings(Aql.valueOf((String) r.get("aql")), InspectionLevel.valueOf((String) r.get("inspection_level")),
                 DecisionRule.valueOf((String) r.get("decision_rule")), ((Number) r.get("guard_band_factor")).doubleValue(),
-                ((Number) r.get("max_false_accept_risk")).doubleValue());
+                ((Number) r.get("max_false_accept_risk")).doubleValue(),
+                ConditionalCounting.parse((String) r.get("conditional_counting")));
     }
 
     private OffsetDateTime now() {

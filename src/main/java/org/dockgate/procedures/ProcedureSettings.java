@@ -2,18 +2,32 @@ package org.dockgate.procedures;
 
 import org.dockgate.core.decision.DecisionPolicy;
 import org.dockgate.core.decision.DecisionRule;
+import org.dockgate.core.evaluation.ConditionalCounting;
 import org.dockgate.core.sampling.Aql;
 import org.dockgate.core.sampling.InspectionLevel;
 
-/** The engineer's choices a procedure is derived with. */
+/**
+ * The engineer's choices a procedure is derived with, including how conditional verdicts count toward
+ * Ac/Re ({@code conditionalCounting}; null means {@link ConditionalCounting#DEFAULT}, what procedures
+ * approved before it was a setting used).
+ */
 public record ProcedureSettings(Aql aql, InspectionLevel level, DecisionRule rule, double guardBandFactor,
-                                double maxFalseAcceptRisk) {
+                                double maxFalseAcceptRisk, ConditionalCounting conditionalCounting) {
 
     public ProcedureSettings {
         if (aql == null || level == null || rule == null) {
             throw new IllegalArgumentException("Choose the AQL, the inspection level and the decision rule.");
         }
         policyOf(rule, guardBandFactor, maxFalseAcceptRisk); // validates the numbers
+        if (conditionalCounting == null) {
+            conditionalCounting = ConditionalCounting.DEFAULT;
+        }
+    }
+
+    /** With the default counting of conditional results. */
+    public ProcedureSettings(Aql aql, InspectionLevel level, DecisionRule rule, double guardBandFactor,
+                             double maxFalseAcceptRisk) {
+        this(aql, level, rule, guardBandFactor, maxFalseAcceptRisk, ConditionalCounting.DEFAULT);
     }
 
     public DecisionPolicy policy() {

@@ -15,3 +15,9 @@ create table reduced_inspection_decision (
 create index reduced_inspection_decision_pair on reduced_inspection_decision (supplier_id, model_id, id);
 create trigger reduced_inspection_decision_append_only before update, delete on reduced_inspection_decision
     for each row call 'org.dockgate.audit.AppendOnlyTrigger';
+
+-- How a procedure counts CONDITIONAL_PASS / CONDITIONAL_FAIL toward Ac/Re (ConditionalCounting.key():
+-- DEFAULT, STRICT, LENIENT). Null on drafts and revisions made before it was a setting: they used DEFAULT.
+-- Adding a nullable column changes no row, so the append-only trigger on procedure_revision is not involved.
+alter table procedure_draft add column conditional_counting varchar(32);
+alter table procedure_revision add column conditional_counting varchar(32);

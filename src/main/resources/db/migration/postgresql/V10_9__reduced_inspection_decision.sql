@@ -17,3 +17,9 @@ create trigger reduced_inspection_decision_append_only before update or delete o
     for each row execute function dockgate_refuse_change();
 create trigger reduced_inspection_decision_no_truncate before truncate on reduced_inspection_decision
     for each statement execute function dockgate_refuse_change();
+
+-- How a procedure counts CONDITIONAL_PASS / CONDITIONAL_FAIL toward Ac/Re (ConditionalCounting.key():
+-- DEFAULT, STRICT, LENIENT). Null on drafts and revisions made before it was a setting: they used DEFAULT.
+-- Adding a nullable column changes no row, so the append-only trigger on procedure_revision is not involved.
+alter table procedure_draft add column conditional_counting varchar(32);
+alter table procedure_revision add column conditional_counting varchar(32);

@@ -1,6 +1,9 @@
 package org.dockgate.catalogue;
 
+import static org.hamcrest.Matchers.allOf;
 import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.hasItem;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
 import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.httpBasic;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.get;
 import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
@@ -61,5 +64,37 @@ class CatalogueApiTest {
         mvc.perform(get("/api/v1/sensor-models/999999").with(httpBasic("auditor", "auditor-demo")))
                 .andExpect(status().isNotFound())
                 .andExpect(content().contentTypeCompatibleWith(MediaType.APPLICATION_PROBLEM_JSON));
+    }
+
+    @Test
+    void anRtdSpecificationCarriesItsConstructionAndTheDerivationFlagsPointsOutsideTheClassRange() throws Exception {
+        String part = "RTD-" + UUID.randomUUID().toString().substring(0, 6);
+        String body = """
+            {"partNumber":"%s","name":"Pt100 thin-film element, class A","measurand":"temperature","outputKind":"RESISTANCE",
+             "excitation":"1 mA","supplierCodes":["TWI"],
+             "specification":{"kind":"RTD","inputUnit":"°C","rangeMin":-50,"rangeMax":250,"outputUnit":"Ω",
+               "rtd":{"r0Ohm":100,"toleranceClass":"A","construction":"THIN_FILM"}}}
+            """.formatted(part);
+        mvc.perform(post("/api/v1/sensor-models").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON).content(body))
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.latest.specification.rtd.construction").value("THIN_FILM"));
+        var model = catalogue.modelByPartNumber(part).orElseThrow();
+        // IEC 60751:2008 Table 3 (from memory, not checked against the printed table): class A thin-film -30 … 300 °C.
+        mvc.perform(post("/api/v1/procedures/derive").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON)
+                        .content("{\"specificationRevisionId\":" + model.latest().id() + "}"))
+                .andExpect(status().isOk())
+                .andExpect(jsonPath("$.reasoning").value(hasItem(allOf(
+                        containsString("Outside the validity range of class A for a thin-film element"),
+                        containsString("IEC 60751:2008 Table 3): -50 ")))));
+        mvc.perform(get("/catalogue/" + model.id()).with(user("auditor").roles("AUDITOR")))
+                .andExpect(status().isOk()).andExpect(content().string(containsString("class A, thin-film element")));
+        // A datasheet stored before the construction was asked for reads as wire-wound.
+        String old = body.replace(part, part + "W").replace(",\"construction\":\"THIN_FILM\"", "");
+        mvc.perform(post("/api/v1/sensor-models").with(httpBasic("engineer", "engineer-demo"))
+                        .contentType(MediaType.APPLICATION_JSON).content(old))
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.latest.specification.rtd.construction").value("WIRE_WOUND"));
     }
 }

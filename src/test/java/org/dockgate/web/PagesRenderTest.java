@@ -49,6 +49,20 @@ class PagesRenderTest {
     }
 
     @org.junit.jupiter.api.Test
+    void theProcedurePagesOfferAndStateTheCountingOfConditionalResults() throws Exception {
+        var model = catalogue.modelByPartNumber("QP-250").orElseThrow();
+        var procedure = procedures.approvedFor(model.id()).orElseThrow();
+        mvc.perform(get("/procedures?model=" + model.id()).with(user("engineer").roles("ENGINEER")))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString("name=\"conditionalCounting\"")))
+                .andExpect(content().string(containsString("value=\"STRICT\"")));
+        mvc.perform(get("/procedures/" + procedure.id()).with(user("auditor").roles("AUDITOR")))
+                .andExpect(status().isOk())
+                .andExpect(content().string(containsString(
+                        procedure.settings().conditionalCounting().inWords())));
+    }
+
+    @org.junit.jupiter.api.Test
     void anApprovedProcedurePrintsAsPdf() throws Exception {
         var model = catalogue.modelByPartNumber("PX-4410").orElseThrow();
         var procedure = procedures.approvedFor(model.id()).orElseThrow();

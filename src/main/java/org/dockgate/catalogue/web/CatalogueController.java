@@ -34,6 +34,11 @@ class CatalogueController {
         return SensorKind.values();
     }
 
+    @ModelAttribute("rtdConstructions")
+    org.dockgate.core.rtd.RtdConstruction[] rtdConstructions() {
+        return org.dockgate.core.rtd.RtdConstruction.values();
+    }
+
     @ModelAttribute("outputKinds")
     OutputKind[] outputKinds() {
         return OutputKind.values();

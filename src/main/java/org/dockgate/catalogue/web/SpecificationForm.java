@@ -13,6 +13,7 @@ import org.dockgate.core.procedure.SensorSpecification.NoiseFloor;
 import org.dockgate.core.procedure.SensorSpecification.NonlinearityReference;
 import org.dockgate.core.procedure.SensorSpecification.Referred;
 import org.dockgate.core.procedure.SensorSpecification.RtdClass;
+import org.dockgate.core.rtd.RtdConstruction;
 import org.dockgate.core.procedure.SensorSpecification.Sensitivity;
 import org.dockgate.core.procedure.SensorSpecification.ToleranceMode;
 import org.dockgate.core.procedure.SensorSpecification.ZeroOffset;
@@ -29,12 +30,13 @@ record SpecificationForm(String partNumber, String name, String kind, String mea
                          String nonlinearityReference, String hysteresisPctFso, String repeatabilityPctFso,
                          String noiseLimit, String noiseUnit, String noiseReferred, String resolution,
                          String bandwidthMinus3dBHz, String flatnessPercent, String flatnessUpToHz, String referenceHz,
-                         String rtdR0Ohm, String rtdClass, String reason, Integer expectedRevision) {
+                         String rtdR0Ohm, String rtdClass, String rtdConstruction, String reason,
+                         Integer expectedRevision) {
 
     static SpecificationForm empty() {
         return new SpecificationForm("", "", "PRESSURE_TRANSDUCER", "", "VOLTAGE", "", List.of(), "", "", "", "", "", "",
-                "", "PERCENT", "", "", "", "", "", "BEST_FIT", "", "", "", "", "OUTPUT", "", "", "", "", "", "", "", "",
-                null);
+                "", "PERCENT", "", "", "", "", "", "BEST_FIT", "", "", "", "", "OUTPUT", "", "", "", "", "", "", "",
+                "WIRE_WOUND", "", null);
     }
 
     static SpecificationForm of(String partNumber, String name, String measurand, OutputKind outputKind,
@@ -57,7 +59,8 @@ record SpecificationForm(String partNumber, String name, String kind, String mea
                 s.bandwidth() == null ? "" : num(s.bandwidth().flatnessPercent()),
                 s.bandwidth() == null ? "" : num(s.bandwidth().upToHz()),
                 s.bandwidth() == null ? "" : num(s.bandwidth().referenceHz()),
-                s.rtd() == null ? "" : num(s.rtd().r0Ohm()), s.rtd() == null ? "" : s.rtd().toleranceClass(), "", revision);
+                s.rtd() == null ? "" : num(s.rtd().r0Ohm()), s.rtd() == null ? "" : s.rtd().toleranceClass(),
+                s.rtd() == null ? "WIRE_WOUND" : s.rtd().construction().name(), "", revision);
     }
 
     /** Field errors found while reading the form; empty when the form could be read. */
@@ -116,7 +119,10 @@ record SpecificationForm(String partNumber, String name, String kind, String mea
         Double r0 = number(rtdR0Ohm, "rtdR0Ohm", false, problems);
         if (r0 != null) {
             required(rtdClass, "rtdClass", problems);
-            rtd = blank(rtdClass) ? null : new RtdClass(r0, rtdClass.trim().toUpperCase(Locale.ROOT));
+            // The construction sets each class's validity range (IEC 60751:2008 Table 3); the form offers both.
+            RtdConstruction construction = choice(RtdConstruction.class, rtdConstruction, "rtdConstruction", problems);
+            rtd = blank(rtdClass) || construction == null ? null
+                    : new RtdClass(r0, rtdClass.trim().toUpperCase(Locale.ROOT), construction);
         }
         Double accuracy = number(accuracyPctFso, "accuracyPctFso", false, problems);
         Double nonlinearity = number(nonlinearityPctFso, "nonlinearityPctFso", false, problems);

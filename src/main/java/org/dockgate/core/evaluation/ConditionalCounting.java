@@ -28,6 +28,53 @@ public record ConditionalCounting(boolean conditionalPassNonconforming, boolean 
     public static final ConditionalCounting LENIENT = new ConditionalCounting(false, false);
 
     /**
+     * The name a procedure stores: {@code DEFAULT}, {@code STRICT}, {@code LENIENT}, or
+     * {@code CONDITIONAL_PASS_ONLY} for the remaining combination.
+     *
+     * @return the name
+     */
+    public String key() {
+        if (conditionalPassNonconforming) {
+            return conditionalFailNonconforming ? "STRICT" : "CONDITIONAL_PASS_ONLY";
+        }
+        return conditionalFailNonconforming ? "DEFAULT" : "LENIENT";
+    }
+
+    /**
+     * The counting a stored name stands for ({@link #key()}); blank or null is {@link #DEFAULT}, the
+     * counting every procedure used before it became a setting.
+     *
+     * @param key the stored name, any case
+     * @return the counting
+     * @throws IllegalArgumentException for an unknown name, listing the known ones
+     */
+    public static ConditionalCounting parse(String key) {
+        if (key == null || key.isBlank()) {
+            return DEFAULT;
+        }
+        return switch (key.strip().toUpperCase(java.util.Locale.ROOT)) {
+            case "DEFAULT" -> DEFAULT;
+            case "STRICT" -> STRICT;
+            case "LENIENT" -> LENIENT;
+            case "CONDITIONAL_PASS_ONLY" -> new ConditionalCounting(true, false);
+            default -> throw new IllegalArgumentException("Unknown counting of conditional results '" + key
+                    + "'; expected DEFAULT, STRICT or LENIENT.");
+        };
+    }
+
+    /**
+     * The counting in words, as procedures and certificates state it.
+     *
+     * @return one sentence
+     */
+    public String inWords() {
+        return "Counting toward Ac/Re: a FAIL counts as nonconforming"
+                + (conditionalFailNonconforming ? ", a CONDITIONAL FAIL counts" : ", a CONDITIONAL FAIL does not count")
+                + (conditionalPassNonconforming ? ", a CONDITIONAL PASS counts" : ", a CONDITIONAL PASS does not count")
+                + "; a PASS never counts.";
+    }
+
+    /**
      * Whether a unit with this verdict counts as nonconforming.
      *
      * @param verdict the unit's verdict

@@ -348,8 +348,10 @@ final class StaticMetrics {
             double t = Units.convert(p.input(), in, "Cel");
             double error = curve.temperatureC(p.output() * ohmPerOutput) - t;
             double halfWidth = cls.toleranceC(t);
-            if (!cls.isValidAt(t)) {
+            if (!cls.isValidAt(t, spec.rtd().construction())) {
+                // IEC 60751:2008 Table 3: the class is not defined here for this construction, so no verdict.
                 outside.add(fmt(t));
+                continue;
             }
             Tolerance tolerance = Tolerance.between(-halfWidth, halfWidth);
             double perOutput = ohmPerOutput / curve.sensitivityOhmPerC(t);
@@ -372,15 +374,24 @@ final class StaticMetrics {
             checks.add(new PointCheck(p.input(), p.direction(), p.cycle(), error, tolerance, judged.expanded(),
                     judged.budget(), judged.decision().verdict(), judged.decision().probabilityOfConformance()));
         }
+        var construction = spec.rtd().construction();
+        String notApplied = " Class " + cls.name() + " does not apply at " + String.join(", ", outside) + " °C: outside"
+                + " its validity range for a " + construction.label() + " element, " + fmt(cls.minTemperatureC(construction))
+                + " … " + fmt(cls.maxTemperatureC(construction)) + " °C (IEC 60751:2008 Table 3); those readings are"
+                + " not judged.";
+        if (checks.isEmpty()) {
+            throw new UnevaluableException("no reading lies where class " + cls.name() + " applies to a "
+                    + construction.label() + " element (" + fmt(cls.minTemperatureC(construction)) + " … "
+                    + fmt(cls.maxTemperatureC(construction)) + " °C, IEC 60751:2008 Table 3)");
+        }
         int deciding = decidingPoint(checks);
         PointCheck d = checks.get(deciding);
         String note = "Temperature error t(R) − t_reference of each reading, t(R) by the IEC 60751 Callendar–Van Dusen"
                 + " equation with R0 = " + fmt(spec.rtd().r0Ohm()) + " Ω, judged against class " + cls.name()
-                + " ±(tolerance at that temperature); deciding reading: " + describe(d) + ", tolerance ±"
-                + fmt(d.tolerance().upper().getAsDouble()) + " °C.";
+                + " (" + construction.label() + ") ±(tolerance at that temperature); deciding reading: " + describe(d)
+                + ", tolerance ±" + fmt(d.tolerance().upper().getAsDouble()) + " °C.";
         if (!outside.isEmpty()) {
-            note += " Class " + cls.name() + " is not defined at " + String.join(", ", outside)
-                    + " °C (IEC 60751 validity range); those readings are judged by its formula all the same.";
+            note += notApplied;
         }
         return Judgement.result(a, d.error(), d.tolerance(), judgedPoints.get(deciding), note, checks);
     }

@@ -157,9 +157,10 @@ public final class ProcedureDerivation {
         }
         if (spec.rtd() != null) {
             ToleranceClass cls = ToleranceClass.parse(spec.rtd().toleranceClass());
-            double tightest = statics.pointsInput().stream().mapToDouble(cls::toleranceC).min().orElseThrow();
-            double tightestAt = statics.pointsInput().stream().min(Comparator.comparingDouble(cls::toleranceC))
-                    .orElseThrow();
+            List<Double> inClassRange = rtdPointsInClassRange(spec, statics.pointsInput());
+            List<Double> judged = inClassRange.isEmpty() ? statics.pointsInput() : inClassRange;
+            double tightest = judged.stream().mapToDouble(cls::toleranceC).min().orElseThrow();
+            double tightestAt = judged.stream().min(Comparator.comparingDouble(cls::toleranceC)).orElseThrow();
             OptionalDouble u = staticRef.map(r -> OptionalDouble.of(r.expandedUncertaintyAt().applyAsDouble(tightestAt)))
                     .orElse(OptionalDouble.empty());
             acceptance.add(metric(Metric.RTD_TOLERANCE, "°C", Tolerance.between(-tightest, tightest), u, k, policy,
@@ -169,10 +170,7 @@ public final class ProcedureDerivation {
                             + "R(t) by Callendar–Van Dusen.", false));
             // Check the curve exists for R0 (throws a clear message otherwise).
             CallendarVanDusen.iec60751(spec.rtd().r0Ohm());
-            if (statics.pointsInput().stream().anyMatch(t -> !cls.isValidAt(t))) {
-                reasoning.add("Some points lie outside the temperature range where class " + cls.name()
-                        + " is defined; the procedure judges them against class B or asks the engineer to trim the range.");
-            }
+            rtdOutsideClassRange(spec, statics.pointsInput()).ifPresent(reasoning::add);
         }
         if (spec.noiseFloor() != null) {
             var n = spec.noiseFloor();
@@ -443,5 +441,34 @@ public final class ProcedureDerivation {
             return String.valueOf((long) value);
         }
         return new BigDecimal(value).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+    }
+
+    /**
+     * The test temperatures at which the specification's IEC 60751 class is defined for its element's
+     * construction (IEC 60751:2008 Table 3, {@link ToleranceClass#isValidAt(double, org.dockgate.core.rtd.RtdConstruction)}).
+     */
+    private static List<Double> rtdPointsInClassRange(SensorSpecification spec, List<Double> pointsC) {
+        ToleranceClass cls = ToleranceClass.parse(spec.rtd().toleranceClass());
+        return pointsC.stream().filter(t -> cls.isValidAt(t, spec.rtd().construction())).toList();
+    }
+
+    /**
+     * A reasoning line flagging test temperatures outside the class's validity range for the element's
+     * construction (IEC 60751:2008 Table 3): the class does not apply there, so those readings are
+     * recorded but not judged against it.
+     */
+    private static Optional<String> rtdOutsideClassRange(SensorSpecification spec, List<Double> pointsC) {
+        ToleranceClass cls = ToleranceClass.parse(spec.rtd().toleranceClass());
+        var construction = spec.rtd().construction();
+        List<String> outside = pointsC.stream().filter(t -> !cls.isValidAt(t, construction)).map(ProcedureDerivation::fmt)
+                .toList();
+        if (outside.isEmpty()) {
+            return Optional.empty();
+        }
+        return Optional.of("Outside the validity range of class " + cls.name() + " for a " + construction.label()
+                + " element (" + fmt(cls.minTemperatureC(construction)) + " … " + fmt(cls.maxTemperatureC(construction))
+                + " °C, IEC 60751:2008 Table 3): " + String.join(", ", outside) + " °C. The class does not apply there:"
+                + " those readings are recorded but not judged against it; trim the range or change the points to"
+                + " judge the class over its whole range.");
     }
 }

@@ -58,8 +58,22 @@ public record SensorSpecification(SensorKind kind, String inputUnit, double rang
         }
     }
 
-    /** A platinum RTD's R0 and IEC 60751 tolerance class. */
-    public record RtdClass(double r0Ohm, String toleranceClass) {
+    /**
+     * A platinum RTD's R0, IEC 60751 tolerance class and element construction, which sets the class's
+     * validity range (IEC 60751:2008 Table 3). A specification recorded before the construction was asked
+     * for has none and reads as wire-wound, the only ranges modelled until then.
+     */
+    public record RtdClass(double r0Ohm, String toleranceClass, org.dockgate.core.rtd.RtdConstruction construction) {
+        public RtdClass {
+            if (construction == null) {
+                construction = org.dockgate.core.rtd.RtdConstruction.WIRE_WOUND;
+            }
+        }
+
+        /** A wire-wound element. */
+        public RtdClass(double r0Ohm, String toleranceClass) {
+            this(r0Ohm, toleranceClass, org.dockgate.core.rtd.RtdConstruction.WIRE_WOUND);
+        }
     }
 
     public SensorSpecification {

@@ -6,34 +6,42 @@ import java.util.stream.Collectors;
 
 /**
  * IEC 60751 tolerance classes of platinum resistance thermometers: tolerance ±(c₀ + c₁·|t|) °C,
- * each valid over a temperature range.
+ * each valid over a temperature range that depends on the element's construction.
  *
  * <p>Formulas and wire-wound validity ranges: IEC 60751:2008 (reference sheet §6.1 and check case A8,
- * confirmed through copies quoting the standard's class table). Thin-film elements have narrower
- * ranges (AA 0 … 150 °C, A −30 … 300 °C, B −50 … 500 °C, C −50 … 600 °C, from memory, not yet
- * checked against the standard) and are not modelled here; the tolerance applies to the complete
- * thermometer. Class AA was formerly called "1/3 DIN".
+ * confirmed through copies quoting the standard's class table). Validity ranges per construction,
+ * IEC 60751:2008 Table 3: wire-wound AA −50 … 250 °C, A −100 … 450 °C, B −196 … 600 °C, C −196 … 600 °C;
+ * thin-film AA 0 … 150 °C, A −30 … 300 °C, B −50 … 500 °C, C −50 … 600 °C. The wire-wound ranges agree
+ * with the copies of the class table quoted above; the thin-film ranges, and the table's number, are
+ * from memory: no copy of the printed standard was at hand to check them, so they must be checked
+ * against IEC 60751:2008 Table 3 before release. The tolerance applies to the complete thermometer.
+ * Class AA was formerly called "1/3 DIN".
  */
 public enum ToleranceClass {
-    /** ±(0.10 + 0.0017|t|) °C, −50 … 250 °C. */
-    AA(0.10, 0.0017, -50, 250),
-    /** ±(0.15 + 0.002|t|) °C, −100 … 450 °C. */
-    A(0.15, 0.002, -100, 450),
-    /** ±(0.30 + 0.005|t|) °C, −196 … 600 °C. */
-    B(0.30, 0.005, -196, 600),
-    /** ±(0.60 + 0.01|t|) °C, −196 … 600 °C. */
-    C(0.60, 0.01, -196, 600);
+    /** ±(0.10 + 0.0017|t|) °C; wire-wound −50 … 250 °C, thin-film 0 … 150 °C. */
+    AA(0.10, 0.0017, -50, 250, 0, 150),
+    /** ±(0.15 + 0.002|t|) °C; wire-wound −100 … 450 °C, thin-film −30 … 300 °C. */
+    A(0.15, 0.002, -100, 450, -30, 300),
+    /** ±(0.30 + 0.005|t|) °C; wire-wound −196 … 600 °C, thin-film −50 … 500 °C. */
+    B(0.30, 0.005, -196, 600, -50, 500),
+    /** ±(0.60 + 0.01|t|) °C; wire-wound −196 … 600 °C, thin-film −50 … 600 °C. */
+    C(0.60, 0.01, -196, 600, -50, 600);
 
     private final double constantC;
     private final double proportional;
     private final double minTemperatureC;
     private final double maxTemperatureC;
+    private final double filmMinTemperatureC;
+    private final double filmMaxTemperatureC;
 
-    ToleranceClass(double constantC, double proportional, double minTemperatureC, double maxTemperatureC) {
+    ToleranceClass(double constantC, double proportional, double minTemperatureC, double maxTemperatureC,
+                   double filmMinTemperatureC, double filmMaxTemperatureC) {
         this.constantC = constantC;
         this.proportional = proportional;
         this.minTemperatureC = minTemperatureC;
         this.maxTemperatureC = maxTemperatureC;
+        this.filmMinTemperatureC = filmMinTemperatureC;
+        this.filmMaxTemperatureC = filmMaxTemperatureC;
     }
 
     /**
@@ -70,17 +78,31 @@ public enum ToleranceClass {
     }
 
     /**
-     * Whether the class is defined at a temperature (wire-wound validity range, limits inclusive).
+     * Whether the class is defined at a temperature for a wire-wound element (limits inclusive); same as
+     * {@code isValidAt(t, RtdConstruction.WIRE_WOUND)}.
      *
      * @param temperatureC t in °C
      * @return true inside the range
      */
     public boolean isValidAt(double temperatureC) {
-        return temperatureC >= minTemperatureC && temperatureC <= maxTemperatureC;
+        return isValidAt(temperatureC, RtdConstruction.WIRE_WOUND);
     }
 
     /**
-     * Lowest temperature of the validity range.
+     * Whether the class is defined at a temperature for the construction (IEC 60751:2008 Table 3,
+     * limits inclusive).
+     *
+     * @param temperatureC t in °C
+     * @param construction the element's construction
+     * @return true inside the range
+     * @throws NullPointerException when the construction is null
+     */
+    public boolean isValidAt(double temperatureC, RtdConstruction construction) {
+        return temperatureC >= minTemperatureC(construction) && temperatureC <= maxTemperatureC(construction);
+    }
+
+    /**
+     * Lowest temperature of the wire-wound validity range.
      *
      * @return °C
      */
@@ -89,12 +111,36 @@ public enum ToleranceClass {
     }
 
     /**
-     * Highest temperature of the validity range.
+     * Highest temperature of the wire-wound validity range.
      *
      * @return °C
      */
     public double maxTemperatureC() {
         return maxTemperatureC;
+    }
+
+    /**
+     * Lowest temperature of the validity range for the construction (IEC 60751:2008 Table 3).
+     *
+     * @param construction the element's construction
+     * @return °C
+     * @throws NullPointerException when the construction is null
+     */
+    public double minTemperatureC(RtdConstruction construction) {
+        return java.util.Objects.requireNonNull(construction, "construction") == RtdConstruction.THIN_FILM
+                ? filmMinTemperatureC : minTemperatureC;
+    }
+
+    /**
+     * Highest temperature of the validity range for the construction (IEC 60751:2008 Table 3).
+     *
+     * @param construction the element's construction
+     * @return °C
+     * @throws NullPointerException when the construction is null
+     */
+    public double maxTemperatureC(RtdConstruction construction) {
+        return java.util.Objects.requireNonNull(construction, "construction") == RtdConstruction.THIN_FILM
+                ? filmMaxTemperatureC : maxTemperatureC;
     }
 
     /**

@@ -8,6 +8,7 @@ import org.dockgate.core.sampling.Aql;
 import org.dockgate.core.sampling.InspectionLevel;
 import org.dockgate.procedures.ProcedureService;
 import org.dockgate.procedures.ProcedureSettings;
+import org.dockgate.core.evaluation.ConditionalCounting;
 import org.springframework.stereotype.Controller;
 import org.springframework.ui.Model;
 import org.springframework.web.bind.annotation.GetMapping;
@@ -56,6 +57,7 @@ class ProceduresController {
             page.addAttribute("aqls", Aql.values());
             page.addAttribute("levels", InspectionLevel.values());
             page.addAttribute("rules", DecisionRule.values());
+            page.addAttribute("countings", List.of("DEFAULT", "STRICT", "LENIENT"));
         }
         return "procedures/list";
     }
@@ -65,9 +67,11 @@ class ProceduresController {
                   @RequestParam DecisionRule rule,
                   @RequestParam(defaultValue = "" + DecisionPolicy.DEFAULT_GUARD_BAND_FACTOR) double guardBandFactor,
                   @RequestParam(defaultValue = "" + DecisionPolicy.DEFAULT_MAX_FALSE_ACCEPT_RISK) double maxFalseAcceptRisk,
+                  @RequestParam(defaultValue = "DEFAULT") String conditionalCounting,
                   RedirectAttributes redirect) {
         long id = procedures.createDraft(specificationRevisionId,
-                new ProcedureSettings(aql, level, rule, guardBandFactor, maxFalseAcceptRisk));
+                new ProcedureSettings(aql, level, rule, guardBandFactor, maxFalseAcceptRisk,
+                        ConditionalCounting.parse(conditionalCounting)));
         redirect.addFlashAttribute("notice", "Procedure proposed. Review each value; edits need a reason.");
         return "redirect:/procedures/drafts/" + id;
     }

@@ -46,4 +46,36 @@ class LotTallyTest {
                 .isInstanceOf(IllegalArgumentException.class);
         assertThatThrownBy(() -> LotTally.count(SAMPLE, null)).isInstanceOf(IllegalArgumentException.class);
     }
+
+    @Test
+    void theSameUnitResultsGiveADifferentLotDecisionUnderTheTwoSettings() {
+        // ISO 2859-1:1999 Table 2-A, code letter J, AQL 1.0: n 80, Ac 2, Re 3; clause 11.2: accept when d <= Ac.
+        var plan = org.dockgate.core.sampling.SingleSamplingPlans.plan(1000, org.dockgate.core.sampling.Aql.AQL_1_0,
+                org.dockgate.core.sampling.InspectionLevel.II, org.dockgate.core.sampling.Severity.NORMAL);
+        assertThat(plan.acceptNumber()).isEqualTo(2);
+        List<Verdict> units = new java.util.ArrayList<>(java.util.Collections.nCopies(77, Verdict.PASS));
+        units.addAll(List.of(Verdict.FAIL, Verdict.CONDITIONAL_PASS, Verdict.CONDITIONAL_PASS));
+        int byDefault = LotTally.count(units, ConditionalCounting.DEFAULT);
+        int strict = LotTally.count(units, ConditionalCounting.STRICT);
+        assertThat(byDefault).isEqualTo(1);
+        assertThat(strict).isEqualTo(3);
+        assertThat(org.dockgate.core.sampling.SingleSamplingPlans.disposition(plan, byDefault).accepted()).isTrue();
+        assertThat(org.dockgate.core.sampling.SingleSamplingPlans.disposition(plan, strict).accepted()).isFalse();
+    }
+
+    @Test
+    void aSettingIsStoredByNameAndStatedInWords() {
+        for (ConditionalCounting c : List.of(ConditionalCounting.DEFAULT, ConditionalCounting.STRICT,
+                ConditionalCounting.LENIENT, new ConditionalCounting(true, false))) {
+            assertThat(ConditionalCounting.parse(c.key())).isEqualTo(c);
+        }
+        // Procedures approved before the setting existed have none: they counted as DEFAULT.
+        assertThat(ConditionalCounting.parse(null)).isEqualTo(ConditionalCounting.DEFAULT);
+        assertThat(ConditionalCounting.parse(" strict ")).isEqualTo(ConditionalCounting.STRICT);
+        assertThatThrownBy(() -> ConditionalCounting.parse("SOMETIMES")).isInstanceOf(IllegalArgumentException.class)
+                .hasMessageContaining("DEFAULT, STRICT or LENIENT");
+        assertThat(ConditionalCounting.DEFAULT.inWords()).isEqualTo("Counting toward Ac/Re: a FAIL counts as"
+                + " nonconforming, a CONDITIONAL FAIL counts, a CONDITIONAL PASS does not count; a PASS never counts.");
+        assertThat(ConditionalCounting.STRICT.inWords()).contains("a CONDITIONAL PASS counts;");
+    }
 }

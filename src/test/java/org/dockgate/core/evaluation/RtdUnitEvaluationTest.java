@@ -15,6 +15,8 @@ import org.dockgate.core.procedure.ProcedureProposal.StaticCalibration;
 import org.dockgate.core.procedure.SensorKind;
 import org.dockgate.core.procedure.SensorSpecification;
 import org.dockgate.core.procedure.SensorSpecification.RtdClass;
+import org.dockgate.core.rtd.CallendarVanDusen;
+import org.dockgate.core.rtd.RtdConstruction;
 import org.dockgate.core.sampling.Aql;
 import org.dockgate.core.sampling.InspectionLevel;
 import org.dockgate.core.series.CalibrationPoint;
@@ -113,5 +115,48 @@ class RtdUnitEvaluationTest {
         assertThat(at100.budget().combinedStandardUncertainty()).isCloseTo(uc, within(1e-15));
         // All terms have nu = inf: k = 2 at 95.45 % (GUM G.6.6).
         assertThat(at100.uncertainty().coverageFactor()).isCloseTo(2.0, within(1e-9));
+    }
+
+    @Test
+    void aClassAFilmElementIsNotJudgedAtMinusFifty() {
+        // IEC 60751:2008 Table 3 (from memory, not checked against the printed table): class A thin-film
+        // -30 … 300 °C, wire-wound -100 … 450 °C.
+        double[] temperatures = {-50, 0, 100, 200};
+        CallendarVanDusen curve = CallendarVanDusen.iec60751(100);
+        List<CalibrationPoint> points = new ArrayList<>();
+        for (double t : temperatures) {
+            points.add(new CalibrationPoint(t, curve.resistanceOhm(t), Direction.UP, 1));
+        }
+        // Reads 0.2 °C high at -50 °C only: class A allows ±0.25 °C there, a wire-wound unit passes at that point.
+        points.set(0, new CalibrationPoint(-50, curve.resistanceOhm(-49.8), Direction.UP, 1));
+        UnitMeasurements unit = new UnitMeasurements(points, List.of(), List.of(),
+                MeasurementContext.of(ReferenceUncertainty.constant("DRY-BLOCK-2", 0.02, 2), 0.001));
+        for (RtdConstruction construction : RtdConstruction.values()) {
+            SensorSpecification spec = new SensorSpecification(SensorKind.RTD, "°C", -50, 200, "Ω", null, null, null,
+                    null, null, null, null, null, null, null, new RtdClass(100, "A", construction));
+            ProcedureProposal derived = ProcedureDerivation.derive(spec,
+                    new DerivationOptions(Aql.of(1.0), InspectionLevel.II, POLICY, null), List.of());
+            StaticCalibration s = derived.staticCalibration();
+            ProcedureProposal procedure = new ProcedureProposal(new StaticCalibration(List.of(0.0, 20.0, 60.0, 100.0),
+                    java.util.Arrays.stream(temperatures).boxed().toList(), s.inputUnit(), s.directions(), s.cycles(),
+                    s.settleSeconds(), "DRY-BLOCK-2", s.reasoning()), derived.noiseCapture(), derived.frequencySweep(),
+                    derived.acceptance(), derived.sampling(), derived.environment(), derived.cautions(),
+                    derived.estimatedBenchMinutes(), derived.reasoning());
+            MetricResult rtd = UnitEvaluation.evaluate(spec, procedure, POLICY, unit).metric(Metric.RTD_TOLERANCE)
+                    .orElseThrow();
+            if (construction == RtdConstruction.WIRE_WOUND) {
+                assertThat(rtd.points()).hasSize(4);
+                assertThat(rtd.points().get(0).input()).isEqualTo(-50.0);
+                assertThat(rtd.note()).doesNotContain("does not apply");
+            } else {
+                // The -50 °C reading gets no verdict; the note says the class does not apply there.
+                assertThat(rtd.points()).hasSize(3).noneMatch(p -> p.input() == -50.0);
+                assertThat(rtd.note()).contains("Class A does not apply at -50 °C: outside its validity range for a"
+                        + " thin-film element, -30 … 300 °C (IEC 60751:2008 Table 3)");
+                assertThat(derived.reasoning()).anyMatch(r -> r.startsWith("Outside the validity range of class A for"
+                        + " a thin-film element (-30 … 300 °C, IEC 60751:2008 Table 3)"));
+            }
+            assertThat(rtd.verdict()).isEqualTo(Verdict.PASS);
+        }
     }
 }

@@ -71,6 +71,38 @@ class ToleranceClassTest {
         assertThat(c.isValidAt(max + 0.001)).isFalse();
     }
 
+    @ParameterizedTest(name = "class {0}, {1}: valid {2} … {3} °C")
+    @CsvSource({
+        // IEC 60751:2008 Table 3, wire-wound: the same ranges as above (reference sheet §6.1 [C: S13]).
+        "AA, WIRE_WOUND, -50, 250",
+        "A,  WIRE_WOUND, -100, 450",
+        "B,  WIRE_WOUND, -196, 600",
+        "C,  WIRE_WOUND, -196, 600",
+        // IEC 60751:2008 Table 3, thin-film: from memory, not checked against the printed table.
+        "AA, THIN_FILM, 0, 150",
+        "A,  THIN_FILM, -30, 300",
+        "B,  THIN_FILM, -50, 500",
+        "C,  THIN_FILM, -50, 600",
+    })
+    void validityRangesPerConstruction(ToleranceClass c, RtdConstruction construction, double min, double max) {
+        assertThat(c.minTemperatureC(construction)).isEqualTo(min);
+        assertThat(c.maxTemperatureC(construction)).isEqualTo(max);
+        assertThat(c.isValidAt(min, construction)).isTrue();
+        assertThat(c.isValidAt(max, construction)).isTrue();
+        assertThat(c.isValidAt(min - 0.001, construction)).isFalse();
+        assertThat(c.isValidAt(max + 0.001, construction)).isFalse();
+    }
+
+    @Test
+    void aClassAFilmElementIsNotDefinedAtMinusFifty() {
+        // IEC 60751:2008 Table 3 (from memory): class A thin-film -30 … 300 °C; wire-wound -100 … 450 °C.
+        assertThat(ToleranceClass.A.isValidAt(-50, RtdConstruction.THIN_FILM)).isFalse();
+        assertThat(ToleranceClass.A.isValidAt(-50, RtdConstruction.WIRE_WOUND)).isTrue();
+        assertThat(RtdConstruction.parse(" thin-film ")).isEqualTo(RtdConstruction.THIN_FILM);
+        assertThatThrownBy(() -> RtdConstruction.parse("foil"))
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("WIRE_WOUND, THIN_FILM");
+    }
+
     @Test
     void classAaAt300IsFlagged() {
         // Reference sheet A8: AA at 300 °C is outside its range (-50 … 250), the tool must refuse or flag it.
