@@ -24,6 +24,16 @@ import org.dockgate.receiving.ReceivingService;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
+import org.springframework.boot.webmvc.test.autoconfigure.AutoConfigureMockMvc;
+import org.springframework.http.MediaType;
+import org.springframework.test.web.servlet.MockMvc;
+import static org.hamcrest.Matchers.containsString;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.csrf;
+import static org.springframework.security.test.web.servlet.request.SecurityMockMvcRequestPostProcessors.user;
+import static org.springframework.test.web.servlet.request.MockMvcRequestBuilders.post;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.flash;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.jsonPath;
+import static org.springframework.test.web.servlet.result.MockMvcResultMatchers.status;
 
 /**
  * Conditions are part of the record: a lot is not dispositioned while a sampled unit has none (the message
@@ -32,7 +42,10 @@ import org.springframework.boot.test.context.SpringBootTest;
  * PDFBox.
  */
 @SpringBootTest
+@AutoConfigureMockMvc
 class ConditionsOnTheRecordTest {
+
+    @Autowired MockMvc mvc;
 
     @Autowired LotCertificateService certificates;
     @Autowired CertificateRegister register;
@@ -94,6 +107,17 @@ class ConditionsOnTheRecordTest {
                 new NewConditions(29.4, 47.0, 100.9, reason)));
         assertThatThrownBy(() -> disposition(lot)).hasMessageContaining("recorded for " + s.get(1) + ".")
                 .hasMessageNotContaining(s.get(0) + ",");
+        // The API (409 problem) and the lot page (its message) name the unit too.
+        long version = receiving.lot(lot.id()).orElseThrow().version();
+        mvc.perform(post("/api/v1/lots/{id}/disposition", lot.id()).with(user("engineer").roles("ENGINEER"))
+                        .contentType(MediaType.APPLICATION_JSON).content("{\"expectedLotVersion\": " + version + "}"))
+                .andExpect(status().isConflict())
+                .andExpect(jsonPath("$.detail").value(containsString("no environmental conditions are recorded for "
+                        + s.get(1))));
+        mvc.perform(post("/evaluation/lots/{id}/disposition", lot.id()).with(user("engineer").roles("ENGINEER"))
+                        .with(csrf()).param("version", Long.toString(version)))
+                .andExpect(status().is3xxRedirection())
+                .andExpect(flash().attribute("problem", containsString("recorded for " + s.get(1))));
         LotFixtures.as("operator", () -> bench.recordConditions(lot.id(), s.get(1), 22.7, 44.0));
         disposition(lot);
         assertThat(receiving.lot(lot.id()).orElseThrow().state()).isEqualTo(LotState.DISPOSITIONED_ACCEPTED);
