@@ -199,7 +199,7 @@ class BenchServiceTest {
         assertThat(jdbc.queryForObject("select count(*) from bench_conditions where lot_id = ?", Integer.class, lot.id()))
                 .isEqualTo(2);
         assertThatThrownBy(() -> as("operator", () -> bench.recordConditions(lot.id(), serial, 22.0, 140.0)))
-                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("0 to 100");
+                .isInstanceOf(IllegalArgumentException.class).hasMessageContaining("140 % lies outside 0 … 100 %");
     }
 
     @Test

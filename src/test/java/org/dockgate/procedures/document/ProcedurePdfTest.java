@@ -231,8 +231,10 @@ class ProcedurePdfTest {
     @Test
     void conditionsHistoryAndApprovalAreThere() {
         String text = flat(pressurePages);
-        assertThat(text).contains("Ambient temperature in °C (the lab keeps 23 ± 5 °C")
-                .contains("Relative humidity in %");
+        // The procedure states its environmental limits (common practice: 23 ± 5 °C, 20 … 80 % RH).
+        assertThat(text).contains("Ambient temperature in °C, within 18 … 28 °C")
+                .contains("Relative humidity in %, within 20 … 80 % RH")
+                .contains("Environmental limits: Ambient temperature 18 … 28 °C, relative humidity 20 … 80 % RH");
         assertThat(text).contains("1 SUPERSEDED 2025-09-01 M. Lindqvist First issue")
                 .contains("2 APPROVED 2026-02-10 M. Lindqvist Specification rev 3: hysteresis limit tightened");
         assertThat(text).contains("Author M. Lindqvist").contains("Approved by R. Okafor")
