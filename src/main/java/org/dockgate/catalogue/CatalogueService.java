@@ -225,7 +225,7 @@ public class CatalogueService {
 
     private SpecificationRevision toRevision(SpecificationRevisionRow r, String partNumber) {
         return new SpecificationRevision(r.getId(), r.getModelId(), partNumber, r.getRevisionNo(),
-                json.readValue(r.getSpecificationJson(), SensorSpecification.class), r.getReason(), r.getCreatedBy(),
+                org.dockgate.platform.StoredJson.reader(json, SensorSpecification.class).readValue(r.getSpecificationJson()), r.getReason(), r.getCreatedBy(),
                 r.getCreatedAt());
     }
 

@@ -87,10 +87,8 @@ public class EvaluationService {
         this.clock = clock;
         this.json = json;
         // Readers built once: frozen records are read back on every look at a dispositioned lot.
-        this.unitReader = json.readerFor(UnitEvaluationView.class)
-                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
-        this.resultReader = json.readerFor(UnitResult.class)
-                .without(tools.jackson.databind.DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES);
+        this.unitReader = org.dockgate.platform.StoredJson.reader(json, UnitEvaluationView.class);
+        this.resultReader = org.dockgate.platform.StoredJson.reader(json, UnitResult.class);
     }
 
     /** Evaluates one unit from its current readings (superseded readings are left out). */

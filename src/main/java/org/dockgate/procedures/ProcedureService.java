@@ -161,7 +161,7 @@ public class ProcedureService {
         long specId = ((Number) r.get("specification_revision_id")).longValue();
         SpecificationRevision revision = catalogue.revision(specId).orElseThrow();
         ProcedureSettings settings = settings(r);
-        Map<String, String> overrides = json.readValue((String) r.get("overrides_json"), new TypeReference<LinkedHashMap<String, String>>() { });
+        Map<String, String> overrides = org.dockgate.platform.StoredJson.reader(json, new TypeReference<LinkedHashMap<String, String>>() { }).readValue((String) r.get("overrides_json"));
         List<ProcedureDraft.Edit> edits = jdbc.query("select field, old_value, new_value, reason, edited_by, edited_at"
                 + " from procedure_edit where draft_id = ? order by id", (rs, i) -> new ProcedureDraft.Edit(rs.getString(1),
                 rs.getString(2), rs.getString(3), rs.getString(4), rs.getString(5),
@@ -319,7 +319,7 @@ public class ProcedureService {
         SpecificationRevision spec = catalogue.revision(specId).orElseThrow();
         return Optional.of(new ApprovedProcedure(id, spec.modelId(), spec.partNumber(), specId, spec.revisionNo(),
                 ((Number) r.get("revision_no")).intValue(), settings(r),
-                json.readValue((String) r.get("content_json"), ProcedureProposal.class), (String) r.get("justification"),
+                org.dockgate.platform.StoredJson.<ProcedureProposal>read(json, ProcedureProposal.class, (String) r.get("content_json")), (String) r.get("justification"),
                 (String) r.get("author"), (String) r.get("approved_by"), CurrentActor.instant(r.get("approved_at")),
                 ((Number) r.get("superseded")).longValue() > 0));
     }

@@ -1,5 +1,6 @@
 package org.dockgate.web;
 
+import org.dockgate.platform.StoredJson;
 import org.springframework.stereotype.Component;
 import tools.jackson.core.JsonParser;
 import tools.jackson.databind.DeserializationContext;
@@ -12,7 +13,8 @@ import tools.jackson.databind.module.SimpleModule;
  * {@code "NaN"} or {@code "Infinity"} (which the parser would accept for a number) and a literal beyond
  * double precision such as {@code 1e999} (which it would read as infinity). Raw {@code NaN} tokens are
  * already refused by the parser (JSON has no such literal). Registered with the application's JSON
- * mapper as a module bean.
+ * mapper as a module bean. JSON read back from the database ({@link StoredJson}) is exempt: the
+ * application wrote it, and a frozen result may hold ν = ∞.
  */
 @Component
 class FiniteNumbersModule extends SimpleModule {
@@ -39,7 +41,7 @@ class FiniteNumbersModule extends SimpleModule {
         public Double deserialize(JsonParser p, DeserializationContext ctxt) {
             String text = p.currentToken() != null && p.currentToken().isScalarValue() ? p.getString() : null;
             Double value = super.deserialize(p, ctxt);
-            if (value != null && !Double.isFinite(value)) {
+            if (value != null && !Double.isFinite(value) && ctxt.getAttribute(StoredJson.STORED_RECORD) == null) {
                 throw new NotFiniteException(p, text);
             }
             return value;
