@@ -18,6 +18,10 @@ import org.dockgate.core.procedure.SensorSpecification.Sensitivity;
 import org.dockgate.core.procedure.SensorSpecification.ToleranceMode;
 import org.dockgate.core.sampling.Aql;
 import org.dockgate.core.sampling.InspectionLevel;
+import org.dockgate.instruments.InstrumentService;
+import org.dockgate.instruments.NewCalibration;
+import org.dockgate.instruments.NewInstrument;
+import org.dockgate.instruments.UncertaintyMode;
 import org.junit.jupiter.api.Test;
 import org.springframework.beans.factory.annotation.Autowired;
 import org.springframework.boot.test.context.SpringBootTest;
@@ -34,6 +38,7 @@ class ProcedureServiceTest {
     @Autowired CatalogueService catalogue;
     @Autowired AuditReader audit;
     @Autowired JdbcTemplate jdbc;
+    @Autowired InstrumentService instruments;
 
     static final ProcedureSettings SETTINGS = new ProcedureSettings(Aql.of(1.0), InspectionLevel.II,
             DecisionRule.GUARD_BANDED, 1.0, 0.025);
@@ -133,5 +138,30 @@ class ProcedureServiceTest {
         var proposal = procedures.propose(spec, SETTINGS, Map.of("static.cycles", "5"));
         assertThat(proposal.staticCalibration().cycles()).isEqualTo(5);
         assertThat(jdbc.queryForObject("select count(*) from procedure_draft", Integer.class)).isEqualTo(before);
+    }
+
+    @Test
+    void anInstrumentCalibratedAboveZeroIsNotPlannedForTheZeroPoint() {
+        // A force reference finer than the demo's RI-LOD-01, but calibrated over 50 … 1000 N only.
+        String id = "RI-T-" + UUID.randomUUID().toString().substring(0, 8).toUpperCase();
+        var today = instruments.today();
+        as("admin", () -> instruments.create(new NewInstrument(id, "Force standard, calibrated from 50 N", "force", 0,
+                1000, "N", new NewCalibration("C-" + id, today.minusDays(5), today.plusDays(300), 2.0,
+                        List.of(new org.dockgate.instruments.UncertaintyBand(1000, 0.001,
+                                UncertaintyMode.PERCENT_OF_READING)), 50.0, 1000.0, 0.001))));
+        String part = "T-" + UUID.randomUUID().toString().substring(0, 8);
+        var spec = new SensorSpecification(SensorKind.LOAD_CELL, "N", 0, 500, "mV/V",
+                new Sensitivity(0.004, "mV/V/N", 0.25, ToleranceMode.PERCENT), null, null, 0.05, null, null, null,
+                null, null, null, null);
+        long specId = as("engineer", () -> catalogue.createModel(new NewSensorModel(part, "Test load cell", "force",
+                OutputKind.VOLTAGE, "10 V", List.of("QSL"), spec))).latest().id();
+        // Left to itself, the derivation passes over it for the register's 0 … 1000 N instrument.
+        var proposal = procedures.propose(specId, SETTINGS, Map.of());
+        assertThat(proposal.staticCalibration().referenceInstrument()).isNotEqualTo(id).isNotNull();
+        // Chosen by hand, it qualifies for no plan, and the reasoning names the point and the range.
+        var chosen = procedures.propose(specId, SETTINGS, Map.of("static.instrument", id));
+        assertThat(chosen.staticCalibration().referenceInstrument()).isNull();
+        assertThat(chosen.staticCalibration().reasoning()).anyMatch(r -> r.contains(id
+                + " is calibrated over 50 … 1000 N only: 0 N lies outside."));
     }
 }

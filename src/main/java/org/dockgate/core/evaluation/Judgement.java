@@ -65,8 +65,9 @@ final class Judgement {
         if (!upperOnly || divisor == 0.0) {
             return decision.testUncertaintyRatio();
         }
-        return OptionalDouble.of(u.value() == 0.0 ? Double.POSITIVE_INFINITY
-                : tolerance.upper().getAsDouble() / (divisor * u.value()));
+        // U = 0 gives no ratio worth printing (never "∞:1"): the TUR is then left out.
+        return u.value() == 0.0 ? OptionalDouble.empty()
+                : OptionalDouble.of(tolerance.upper().getAsDouble() / (divisor * u.value()));
     }
 
     private static String plannedNote(MetricAcceptance acceptance, ExpandedUncertainty expanded) {

@@ -1,5 +1,6 @@
 package org.dockgate.instruments.web;
 
+import static org.hamcrest.Matchers.closeTo;
 import static org.hamcrest.Matchers.containsString;
 import static org.hamcrest.Matchers.everyItem;
 import static org.hamcrest.Matchers.hasItem;
@@ -206,5 +207,41 @@ class InstrumentsApiTest {
                 .andExpect(content().string(containsString("/api/v1/reference-instruments/{identifier}/calibrations")))
                 .andExpect(content().string(containsString("Reference instruments")))
                 .andExpect(content().string(not(containsString("NoSuchInstrument"))));
+    }
+
+    @Test
+    void aCalibrationStatesItsRangeAndFloorAndBothAreChecked() throws Exception {
+        String id = fresh();
+        postAs("admin", "admin-demo", body(id, "bar", ", \"expandedUncertainty\": 0.01, \"uncertaintyMode\":"
+                        + " \"PERCENT_OF_READING\", \"calibratedMin\": 0.2, \"calibratedMax\": 200,"
+                        + " \"uncertaintyFloor\": 0.0005"))
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.current.calibratedMin").value(0.2))
+                .andExpect(jsonPath("$.current.calibratedMax").value(200.0))
+                .andExpect(jsonPath("$.current.uncertaintyFloor").value(0.0005))
+                .andExpect(jsonPath("$.current.uncertaintyFloorDerived").value(false));
+        // Without them: the instrument's range, and the floor derived (0.01 % × 10 % × 250 bar = 0.0025 bar).
+        String plain = fresh();
+        postAs("admin", "admin-demo", body(plain, "bar", ", \"expandedUncertainty\": 0.01, \"uncertaintyMode\":"
+                        + " \"PERCENT_OF_READING\""))
+                .andExpect(status().isCreated())
+                .andExpect(jsonPath("$.current.calibratedMin").value(0.0))
+                .andExpect(jsonPath("$.current.calibratedMax").value(250.0))
+                .andExpect(jsonPath("$.current.uncertaintyFloor").value(closeTo(0.0025, 1e-12)))
+                .andExpect(jsonPath("$.current.uncertaintyFloorDerived").value(true));
+        postAs("admin", "admin-demo", body(fresh(), "bar", ", \"expandedUncertainty\": 0.01, \"uncertaintyMode\":"
+                        + " \"PERCENT_OF_READING\", \"calibratedMin\": -5"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.field").value("calibratedMin"))
+                .andExpect(jsonPath("$.detail").value(containsString("inside the instrument's range (0 to 250 bar)")));
+        postAs("admin", "admin-demo", body(fresh(), "bar", ", \"expandedUncertainty\": 0.01, \"uncertaintyMode\":"
+                        + " \"PERCENT_OF_READING\", \"calibratedMin\": 100, \"calibratedMax\": 50"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.field").value("calibratedMax"));
+        postAs("admin", "admin-demo", body(fresh(), "bar", ", \"expandedUncertainty\": 0.01, \"uncertaintyMode\":"
+                        + " \"PERCENT_OF_READING\", \"uncertaintyFloor\": 0"))
+                .andExpect(status().isBadRequest())
+                .andExpect(jsonPath("$.field").value("uncertaintyFloor"))
+                .andExpect(jsonPath("$.detail").value(containsString("greater than zero")));
     }
 }
