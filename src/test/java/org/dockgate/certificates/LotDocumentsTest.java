@@ -212,7 +212,10 @@ class LotDocumentsTest {
         mvc.perform(get("/certificates").param("serial", unsampled).with(user("auditor").roles("AUDITOR")))
                 .andExpect(status().isOk())
                 .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
-                        .string(org.hamcrest.Matchers.containsString(issued.certificateNumber())));
+                        .string(org.hamcrest.Matchers.containsString(issued.certificateNumber())))
+                // Times in the lab's zone (application.properties: UTC) to the second, never an ISO instant.
+                .andExpect(org.springframework.test.web.servlet.result.MockMvcResultMatchers.content()
+                        .string(org.hamcrest.Matchers.containsString(ResultFormat.dateTime(issued.signedAt(), java.time.ZoneId.of("UTC")))));
     }
 
     @Test
