@@ -178,7 +178,7 @@ class FrozenResultsTest {
     /** Sections 3 (lot decision), 4 (reference instruments) and 5 (results per unit) of a certificate's text. */
     static List<String> results(List<String> certificateText) {
         int from = certificateText.indexOf("3 Lot decision");
-        int to = certificateText.indexOf("6 Approval");
+        int to = certificateText.indexOf("7 Approval");
         assertThat(from).as(String.join("\n", certificateText)).isNotNegative();
         assertThat(to).isGreaterThan(from);
         // A table split over two pages repeats its header row, and text positions can split a word ("U nit"):
