@@ -208,9 +208,13 @@ public class SigningService {
         layer.setLineWidth(0.8f);
         layer.rectangle(0.5f, 0.5f, box.getWidth() - 1, box.getHeight() - 1);
         layer.stroke();
-        Font small = new Font(pdfs.fonts().regular(), 7.5f);
-        Font label = new Font(pdfs.fonts().bold(), 7.5f);
-        Font big = new Font(pdfs.fonts().bold(), 10.5f);
+        // Every font carries its colour: without one, ColumnText draws in the current fill colour, which is
+        // the box's light fill, and the text is extractable but invisible (issue 12: blank in poppler viewers).
+        Color ink = new Color(0x1a, 0x1a, 0x1a);
+        layer.setColorFill(ink);
+        Font small = new Font(pdfs.fonts().regular(), 7.5f, Font.NORMAL, ink);
+        Font label = new Font(pdfs.fonts().bold(), 7.5f, Font.NORMAL, ink);
+        Font big = new Font(pdfs.fonts().bold(), 10.5f, Font.NORMAL, new Color(0x1f, 0x4e, 0x79));
         ColumnText column = new ColumnText(layer);
         column.setSimpleColumn(pad, pad, box.getWidth() - pad, box.getHeight() - pad);
         column.addText(new Phrase("Digitally signed by\n", small));

@@ -18,9 +18,18 @@ import org.springframework.web.bind.annotation.ModelAttribute;
 class LayoutAdvice {
 
     private final AccessRules rules;
+    private final java.time.ZoneId labZone;
 
-    LayoutAdvice(AccessRules rules) {
+    LayoutAdvice(AccessRules rules,
+                 @org.springframework.beans.factory.annotation.Value("${dockgate.lab.time-zone:UTC}") String labZone) {
         this.rules = rules;
+        this.labZone = java.time.ZoneId.of(labZone);
+    }
+
+    /** The zone pages print times in, with {@code ResultFormat.dateTime(instant, labZone)} (to the second). */
+    @ModelAttribute("labZone")
+    java.time.ZoneId labZone() {
+        return labZone;
     }
 
     @ModelAttribute("navigation")

@@ -20,8 +20,6 @@ import java.awt.Color;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.ZoneOffset;
@@ -34,6 +32,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
 import java.util.OptionalDouble;
+import org.dockgate.core.report.ResultFormat;
 import java.util.Set;
 import org.dockgate.core.procedure.Metric;
 import org.dockgate.core.procedure.ProcedureProposal;
@@ -120,30 +119,14 @@ public class ProcedurePdf {
         return out.toByteArray();
     }
 
-    /** Number as printed: six significant digits at most, no trailing zeros, a true minus sign. */
+    /** Number as printed: a stated value through the one results formatter (six significant digits, true minus). */
     static String number(double value) {
-        if (!Double.isFinite(value)) {
-            return "—";
-        }
-        if (value == 0) {
-            return "0";
-        }
-        String plain = new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros().toPlainString();
-        return plain.startsWith("-") ? "−" + plain.substring(1) : plain;
+        return Double.isFinite(value) ? ResultFormat.stated(value) : "—";
     }
 
     /** "9.925 … 10.075", "≤ 0.25", "≥ 5000", or "—" when neither side is bounded. */
     static String interval(OptionalDouble lower, OptionalDouble upper) {
-        if (lower.isPresent() && upper.isPresent()) {
-            return number(lower.getAsDouble()) + " … " + number(upper.getAsDouble());
-        }
-        if (upper.isPresent()) {
-            return "≤ " + number(upper.getAsDouble());
-        }
-        if (lower.isPresent()) {
-            return "≥ " + number(lower.getAsDouble());
-        }
-        return "—";
+        return lower.isEmpty() && upper.isEmpty() ? "—" : ResultFormat.interval(lower, upper, "");
     }
 
     /** "4.0:1"; "∞:1" when the planned uncertainty is zero. */
