@@ -234,7 +234,7 @@ class LotDocumentsTest {
             units.add(new UnitEvaluationView(u.serial(), new org.dockgate.core.evaluation.UnitResult(metrics,
                     u.result().unitVerdict(), u.result().complete(), u.result().missing()), u.readings(), u.operators(),
                     u.instruments(), u.ambientC(), u.humidityPercent(), u.staticPoints(), u.sweepPoints(),
-                    u.calibrations(), u.frozen()));
+                    u.calibrations(), u.frozen(), u.conditionsDeviation()));
         }
         LotEvaluationView emptied = new LotEvaluationView(ev.lot(), ev.procedure(), units, ev.complete(), ev.nonconforming(),
                 ev.wouldAccept(), ev.nonconformance());

@@ -32,7 +32,7 @@ class ReferencesInForceRangeTest {
     static Reading reading(double point, Instant at) {
         return new Reading(1, 1, "S-1", ReadingTest.STATIC, point, Optional.of(Direction.UP), OptionalInt.of(1), 0,
                 10 * point, "mV", 10 * point, "mV", "RI-T", "operator", at, Optional.empty(), Optional.empty(),
-                Optional.empty(), Optional.empty(), Optional.empty());
+                Optional.empty(), Optional.empty(), Optional.empty(), point, Optional.empty(), Optional.empty());
     }
 
     @Test
@@ -42,7 +42,8 @@ class ReferencesInForceRangeTest {
                 LocalDate.of(2027, 11, 20), 2.0, List.of(new UncertaintyBand(20, 0.01,
                 UncertaintyMode.PERCENT_OF_READING)), RECORDED, 0.2, 20.0, 0.0001);
         InstrumentView view = new InstrumentView("RI-T", "test", "pressure", 0, 20, "bar", record, List.of(record),
-                LocalDate.of(2026, 12, 2), CalibrationStatus.IN_CALIBRATION, 353, 0);
+                LocalDate.of(2026, 12, 2), CalibrationStatus.IN_CALIBRATION, 353, 0,
+                java.util.OptionalDouble.empty());
         Instant at = Instant.parse("2026-12-01T10:00:00Z");
         List<String> problems = new ArrayList<>();
         Map<String, UnitEvaluationView.CalibrationUsed> used = new LinkedHashMap<>();
