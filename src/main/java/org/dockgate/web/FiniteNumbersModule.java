@@ -17,12 +17,23 @@ import tools.jackson.databind.module.SimpleModule;
  * application wrote it, and a frozen result may hold ν = ∞.
  */
 @Component
-class FiniteNumbersModule extends SimpleModule {
+public class FiniteNumbersModule extends SimpleModule {
 
     FiniteNumbersModule() {
         super("dockgate-finite-numbers");
         addDeserializer(Double.class, new FiniteDouble(Double.class, null));
         addDeserializer(Double.TYPE, new FiniteDouble(Double.TYPE, 0d));
+    }
+
+    /**
+     * Whether a read failed because a number was not finite, for code that converts a JSON tree itself and
+     * words its own message.
+     *
+     * @param e the failure
+     * @return whether it is this module's refusal
+     */
+    public static boolean notFinite(Throwable e) {
+        return e instanceof NotFiniteException;
     }
 
     /** A number that reads as NaN or ±infinity; {@code getValue()} is the text that was sent. */

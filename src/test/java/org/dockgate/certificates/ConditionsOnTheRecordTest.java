@@ -145,6 +145,6 @@ class ConditionsOnTheRecordTest {
                 () -> certificates.approveAndSign(lot.id(), LotCertificateTest.ENGINEER2_PASSWORD));
         String text = LotCertificateTest.flat(IndependentSignatureCheck.textWithFields(
                 register.pdf(issued.certificateNumber()).orElseThrow()));
-        assertThat(text).contains("Deviations from the procedure none");
+        assertThat(text).contains("6 Deviations from the procedure None recorded.");
     }
 }

@@ -27,6 +27,9 @@ record ConditionsRequest(Double ambientC, Double relativeHumidityPercent, Double
             return json.treeToValue(node, ConditionsRequest.class);
         } catch (JacksonException e) {
             String field = e.getPath().isEmpty() ? "" : e.getPath().get(e.getPath().size() - 1).getPropertyName();
+            if (org.dockgate.web.FiniteNumbersModule.notFinite(e)) {
+                throw new IllegalArgumentException("'" + field + "' must be a finite number.");
+            }
             throw new IllegalArgumentException("The field '" + field + "' has the wrong type or an unknown name"
                     + " (fields: ambientC, relativeHumidityPercent, pressureKPa, deviationReason).");
         }

@@ -25,6 +25,10 @@ record ReadingRequest(String serial, String test, Double point, String direction
             return json.treeToValue(node, ReadingRequest.class);
         } catch (JacksonException e) {
             String field = e.getPath().isEmpty() ? "" : e.getPath().get(e.getPath().size() - 1).getPropertyName();
+            if (org.dockgate.web.FiniteNumbersModule.notFinite(e)) {
+                throw new IllegalArgumentException((where.isEmpty() ? "" : "Reading " + where + ": ") + "'" + field
+                        + "' must be a finite number.");
+            }
             throw new IllegalArgumentException((where.isEmpty() ? "" : "Reading " + where + ": ") + "the field '"
                     + field + "' has the wrong type or an unknown name.");
         }
