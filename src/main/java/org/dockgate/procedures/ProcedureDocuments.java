@@ -6,6 +6,7 @@ import java.util.Optional;
 import org.dockgate.accounts.AccountService;
 import org.dockgate.accounts.Person;
 import org.dockgate.catalogue.CatalogueService;
+import org.dockgate.core.procedure.KindPractice;
 import org.dockgate.instruments.InstrumentService;
 import org.dockgate.procedures.document.ProcedureDocument;
 import org.dockgate.procedures.document.ProcedurePdf;
@@ -59,7 +60,9 @@ public class ProcedureDocuments {
                 revision.settings().ruleInWords() + " " + revision.settings().conditionalCounting().inWords(),
                 revision.content(), refs,
                 Optional.ofNullable(revision.justification()), name(revision.author()),
-                Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history));
+                Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history,
+                catalogue.revision(revision.specificationRevisionId())
+                        .map(spec -> KindPractice.of(spec.specification(), model.excitation())).orElse(null)));
     }
 
     private String name(String username) {

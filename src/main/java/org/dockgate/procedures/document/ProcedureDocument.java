@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
+import org.dockgate.core.procedure.KindPractice;
 import org.dockgate.core.procedure.ProcedureProposal;
 
 /**
@@ -34,13 +35,27 @@ import org.dockgate.core.procedure.ProcedureProposal;
  * @param author                who wrote the revision
  * @param approval              who approved it and when; empty for a draft
  * @param history               the procedure's revisions, oldest first
+ * @param practice              the kind's preparation items and cautions ({@link KindPractice}); null prints none
  */
 public record ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
                                 String status, String partNumber, String modelName, String sensorKind,
                                 String specificationRevision, String aql, String inspectionLevel,
                                 String decisionRule, ProcedureProposal proposal,
                                 List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
-                                String author, Optional<Approval> approval, List<RevisionEntry> history) {
+                                String author, Optional<Approval> approval, List<RevisionEntry> history,
+                                KindPractice.Practice practice) {
+
+    /** A document without kind practice (documents built before it was printed). */
+    public ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
+                             String status, String partNumber, String modelName, String sensorKind,
+                             String specificationRevision, String aql, String inspectionLevel,
+                             String decisionRule, ProcedureProposal proposal,
+                             List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
+                             String author, Optional<Approval> approval, List<RevisionEntry> history) {
+        this(labName, labAddress, procedureNumber, revision, status, partNumber, modelName, sensorKind,
+                specificationRevision, aql, inspectionLevel, decisionRule, proposal, referenceInstruments,
+                turJustification, author, approval, history, null);
+    }
 
     /**
      * Validates the document: every text that is printed must be present (a blank procedure number or

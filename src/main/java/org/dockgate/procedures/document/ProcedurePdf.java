@@ -35,6 +35,7 @@ import java.util.OptionalDouble;
 import org.dockgate.core.report.ResultFormat;
 import java.util.Set;
 import org.dockgate.core.procedure.Metric;
+import org.dockgate.core.procedure.KindPractice;
 import org.dockgate.core.procedure.ProcedureProposal;
 import org.dockgate.core.procedure.ProcedureProposal.FrequencySweep;
 import org.dockgate.core.procedure.ProcedureProposal.MetricAcceptance;
@@ -223,6 +224,7 @@ public class ProcedurePdf {
             title();
             scope();
             safety();
+            kindPractice();
             instruments();
             steps();
             acceptance();
@@ -265,6 +267,19 @@ public class ProcedurePdf {
                     .toList();
             bullets(cautions, body);
             put(SAFETY_STATEMENT, strong, 4, 0);
+        }
+
+        /** The kind's preparation items and cautions, each with its source (KindPractice), and the deferral. */
+        private void kindPractice() throws DocumentException {
+            KindPractice.Practice practice = doc.practice();
+            if (practice == null) {
+                return;
+            }
+            subsection("Cautions for this kind");
+            bullets(practice.cautions().stream().map(KindPractice.Item::inWords).toList(), body);
+            subsection("Preparation and practice for this kind");
+            bullets(practice.items().stream().map(KindPractice.Item::inWords).toList(), body);
+            put(KindPractice.DEFERRAL, strong, 4, 0);
         }
 
         private void instruments() throws DocumentException {

@@ -81,7 +81,9 @@ class ProceduresController {
         var draft = procedures.draft(id);
         page.addAttribute("draft", draft);
         page.addAttribute("proposal", draft.proposal());
-        page.addAttribute("spec", catalogue.revision(draft.specificationRevisionId()).orElseThrow());
+        var spec = catalogue.revision(draft.specificationRevisionId()).orElseThrow();
+        page.addAttribute("spec", spec);
+        page.addAttribute("practice", practice(spec));
         page.addAttribute("editable", ProcedureFields.EDITABLE);
         return "procedures/draft";
     }
@@ -127,9 +129,17 @@ class ProceduresController {
         var revision = procedures.revision(id).orElseThrow(() -> new org.dockgate.web.NotFoundException("There is no procedure revision " + id + "."));
         page.addAttribute("revision", revision);
         page.addAttribute("proposal", revision.content());
-        page.addAttribute("spec", catalogue.revision(revision.specificationRevisionId()).orElseThrow());
+        var spec = catalogue.revision(revision.specificationRevisionId()).orElseThrow();
+        page.addAttribute("spec", spec);
+        page.addAttribute("practice", practice(spec));
         page.addAttribute("history", procedures.revisions(revision.modelId()));
         return "procedures/revision";
+    }
+
+    /** The kind's preparation and cautions, with the model's stated excitation, as the PDF prints them. */
+    private org.dockgate.core.procedure.KindPractice.Practice practice(org.dockgate.catalogue.SpecificationRevision spec) {
+        String excitation = catalogue.model(spec.modelId()).map(m -> m.excitation()).orElse(null);
+        return org.dockgate.core.procedure.KindPractice.of(spec.specification(), excitation);
     }
 
     /** For the edit form's field list. */
