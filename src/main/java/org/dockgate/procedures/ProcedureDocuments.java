@@ -59,7 +59,9 @@ public class ProcedureDocuments {
                 revision.settings().ruleInWords() + " " + revision.settings().conditionalCounting().inWords(),
                 revision.content(), refs,
                 Optional.ofNullable(revision.justification()), name(revision.author()),
-                Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history));
+                Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history,
+                procedures.edits(revision).stream().map(e -> new ProcedureDocument.EditEntry(e.field(), e.oldValue(),
+                        e.newValue(), e.reason(), name(e.editedBy()), e.editedAt())).toList()));
     }
 
     private String name(String username) {

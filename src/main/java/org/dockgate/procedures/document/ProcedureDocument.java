@@ -34,13 +34,27 @@ import org.dockgate.core.procedure.ProcedureProposal;
  * @param author                who wrote the revision
  * @param approval              who approved it and when; empty for a draft
  * @param history               the procedure's revisions, oldest first
+ * @param edits                 the engineer's edits to the derived proposal in this revision, in order
  */
 public record ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
                                 String status, String partNumber, String modelName, String sensorKind,
                                 String specificationRevision, String aql, String inspectionLevel,
                                 String decisionRule, ProcedureProposal proposal,
                                 List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
-                                String author, Optional<Approval> approval, List<RevisionEntry> history) {
+                                String author, Optional<Approval> approval, List<RevisionEntry> history,
+                                List<EditEntry> edits) {
+
+    /** A document of a revision without edits to its derived proposal. */
+    public ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
+                             String status, String partNumber, String modelName, String sensorKind,
+                             String specificationRevision, String aql, String inspectionLevel,
+                             String decisionRule, ProcedureProposal proposal,
+                             List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
+                             String author, Optional<Approval> approval, List<RevisionEntry> history) {
+        this(labName, labAddress, procedureNumber, revision, status, partNumber, modelName, sensorKind,
+                specificationRevision, aql, inspectionLevel, decisionRule, proposal, referenceInstruments,
+                turJustification, author, approval, history, List.of());
+    }
 
     /**
      * Validates the document: every text that is printed must be present (a blank procedure number or
@@ -73,6 +87,7 @@ public record ProcedureDocument(String labName, String labAddress, String proced
         }
         referenceInstruments = referenceInstruments == null ? List.of() : List.copyOf(referenceInstruments);
         history = history == null ? List.of() : List.copyOf(history);
+        edits = edits == null ? List.of() : List.copyOf(edits);
         turJustification = Objects.requireNonNullElse(turJustification, Optional.<String>empty())
                 .filter(text -> !text.isBlank());
         approval = Objects.requireNonNullElse(approval, Optional.empty());
@@ -140,6 +155,26 @@ public record ProcedureDocument(String labName, String labAddress, String proced
                         "A revision history line needs its revision number, status, date and who.");
             }
             reason = reason == null ? "" : reason;
+        }
+    }
+
+    /**
+     * One edit of a proposed value, as recorded with its reason.
+     *
+     * @param field    the edited value's key, e.g. "static.cycles"
+     * @param oldValue the value before, or "derived" when the derived value was replaced
+     * @param newValue the value after
+     * @param reason   why
+     * @param who      who edited it
+     * @param at       when (printed in UTC)
+     */
+    public record EditEntry(String field, String oldValue, String newValue, String reason, String who, Instant at) {
+        /** @throws IllegalArgumentException when a part is missing */
+        public EditEntry {
+            if (field == null || newValue == null || reason == null || who == null || at == null) {
+                throw new IllegalArgumentException("An edit needs its field, new value, reason, who and when.");
+            }
+            oldValue = oldValue == null ? "derived" : oldValue;
         }
     }
 

@@ -129,6 +129,7 @@ class ProceduresController {
         page.addAttribute("proposal", revision.content());
         page.addAttribute("spec", catalogue.revision(revision.specificationRevisionId()).orElseThrow());
         page.addAttribute("history", procedures.revisions(revision.modelId()));
+        page.addAttribute("edits", procedures.edits(revision));
         return "procedures/revision";
     }
 
