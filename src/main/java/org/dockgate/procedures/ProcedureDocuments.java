@@ -62,7 +62,9 @@ public class ProcedureDocuments {
                 Optional.ofNullable(revision.justification()), name(revision.author()),
                 Optional.of(new ProcedureDocument.Approval(name(revision.approvedBy()), revision.approvedAt())), history,
                 catalogue.revision(revision.specificationRevisionId())
-                        .map(spec -> KindPractice.of(spec.specification(), model.excitation())).orElse(null)));
+                        .map(spec -> KindPractice.of(spec.specification(), model.excitation())).orElse(null),
+                procedures.edits(revision).stream().map(e -> new ProcedureDocument.EditEntry(e.field(), e.oldValue(),
+                        e.newValue(), e.reason(), name(e.editedBy()), e.editedAt())).toList()));
     }
 
     private String name(String username) {

@@ -162,15 +162,27 @@ public class ProcedureService {
         SpecificationRevision revision = catalogue.revision(specId).orElseThrow();
         ProcedureSettings settings = settings(r);
         Map<String, String> overrides = org.dockgate.platform.StoredJson.reader(json, new TypeReference<LinkedHashMap<String, String>>() { }).readValue((String) r.get("overrides_json"));
-        List<ProcedureDraft.Edit> edits = jdbc.query("select field, old_value, new_value, reason, edited_by, edited_at"
-                + " from procedure_edit where draft_id = ? order by id", (rs, i) -> new ProcedureDraft.Edit(rs.getString(1),
-                rs.getString(2), rs.getString(3), rs.getString(4), rs.getString(5),
-                rs.getObject(6, OffsetDateTime.class).toInstant()), id);
+        List<ProcedureDraft.Edit> edits = editsOfDraft(id);
         Number approved = (Number) r.get("approved_revision_id");
         return new ProcedureDraft(id, revision.modelId(), revision.partNumber(), specId, revision.revisionNo(), settings,
                 overrides, propose(specId, settings, overrides), (String) r.get("justification"), (String) r.get("author"),
                 CurrentActor.instant(r.get("created_at")), (String) r.get("status"), approved == null ? null : approved.longValue(), edits,
                 ((Number) r.get("version")).longValue());
+    }
+
+    private List<ProcedureDraft.Edit> editsOfDraft(long draftId) {
+        return jdbc.query("select field, old_value, new_value, reason, edited_by, edited_at"
+                + " from procedure_edit where draft_id = ? order by id", (rs, i) -> new ProcedureDraft.Edit(rs.getString(1),
+                rs.getString(2), rs.getString(3), rs.getString(4), rs.getString(5),
+                rs.getObject(6, OffsetDateTime.class).toInstant()), draftId);
+    }
+
+    /** The edits, with their reasons, of the draft an approved revision was made from, in order. */
+    @Transactional(readOnly = true)
+    public List<ProcedureDraft.Edit> edits(ApprovedProcedure revision) {
+        List<Long> drafts = jdbc.queryForList("select draft_id from procedure_revision where id = ? and draft_id is not null",
+                Long.class, revision.id());
+        return drafts.isEmpty() ? List.of() : editsOfDraft(drafts.get(0));
     }
 
     @Transactional(readOnly = true)

@@ -63,7 +63,7 @@ final class ProposalEditor {
         NoiseCapture n = p.noiseCapture();
         FrequencySweep f = p.frequencySweep();
         List<MetricAcceptance> acceptance = new ArrayList<>(p.acceptance());
-        int minutes = p.estimatedBenchMinutes();
+        java.util.OptionalInt minutes = java.util.OptionalInt.empty();
         EnvironmentalLimits limits = p.environmentalLimits();
         boolean limitsEdited = false;
         for (var e : overrides.entrySet()) {
@@ -136,7 +136,7 @@ final class ProposalEditor {
                     f = new FrequencySweep(f.referenceHz(), freqs, f.amplitude(), f.amplitudeUnit(), f.referenceInstrument(),
                             f.reasoning());
                 }
-                case "benchMinutes" -> minutes = whole(value, key, 1, 100_000);
+                case "benchMinutes" -> minutes = java.util.OptionalInt.of(whole(value, key, 1, 100_000));
                 case "environment.ambientMinC", "environment.ambientMaxC", "environment.humidityMinPercent",
                      "environment.humidityMaxPercent" -> {
                     double v = number(value, key);
@@ -178,9 +178,11 @@ final class ProposalEditor {
                 }
             }
         }
-        return new ProcedureProposal(s, n, f, acceptance, p.sampling(),
-                limitsEdited ? ProcedureDerivation.environment(limits) : p.environment(), p.cautions(), minutes,
-                p.reasoning(), limits);
+        ProcedureProposal edited = new ProcedureProposal(s, n, f, acceptance, p.sampling(),
+                limitsEdited ? ProcedureDerivation.environment(limits) : p.environment(), p.cautions(),
+                p.estimatedBenchMinutes(), p.reasoning(), limits);
+        // The sentences, reading counts and bench time that depend on the edited values, by the derivation's rules.
+        return ProcedureDerivation.restate(edited, spec, minutes);
     }
 
     private static String example(String key) {

@@ -151,8 +151,8 @@ public final class ProcedureDerivation {
         }
         if (spec.repeatabilityPctFso() != null) {
             acceptance.add(metric(Metric.REPEATABILITY, "%FSO", Tolerance.atMost(spec.repeatabilityPctFso()),
-                    OptionalDouble.empty(), k, policy, refId, "Repeatability (pooled standard deviation over "
-                            + statics.cycles() + " cycles) at most " + fmt(spec.repeatabilityPctFso())
+                    OptionalDouble.empty(), k, policy, refId, "Repeatability (pooled standard deviation over"
+                            + " the cycles of the static plan) at most " + fmt(spec.repeatabilityPctFso())
                             + " %FSO" + cancels, true));
         }
         if (spec.rtd() != null) {
@@ -236,6 +236,69 @@ public final class ProcedureDerivation {
         cautions.add("Acceptance by this inspection does not qualify a part for a safety function. Local codes,"
                 + " licensed practice and the lab's own safety rules govern every test.");
 
+        reasoning.add(benchSentence(statics, noise, sweep));
+        return new ProcedureProposal(statics, noise, sweep, acceptance, sampling, environment, cautions,
+                benchMinutes(statics, noise, sweep), reasoning, limits);
+    }
+
+    /** Opens the proposal's reasoning line on bench time, so that a restatement replaces it rather than adds one. */
+    static final String BENCH_TIME = "Bench time: ";
+
+    /**
+     * Restates, after an engineer's edits, every text and figure that depends on an edited value, by the
+     * same rules the derivation used: the static plan's sentences on points, directions, cycles and settle
+     * time, the noise capture's sentences on sample rate and duration, the sweep's sentence on its
+     * frequencies, and the bench time with its reasoning line. Nothing else changes: the reference
+     * instruments, limits, sampling plans and cautions are carried over as they are.
+     *
+     * <p>Bench time t = 600 s set-up + n·(settle + 15 s) + (noise duration + 60 s) + 20 s per sweep point,
+     * with n = points × directions × cycles readings per unit (the lab's own estimate, common practice),
+     * rounded up to whole minutes.
+     *
+     * @param edited       the proposal with the engineer's values in place
+     * @param spec         the specification it was derived from
+     * @param benchMinutes the bench time the engineer set, which then replaces the estimate (and the
+     *                     reasoning says so); empty to estimate it
+     * @return the proposal with its dependent texts and figures recomputed
+     */
+    public static ProcedureProposal restate(ProcedureProposal edited, SensorSpecification spec,
+                                            java.util.OptionalInt benchMinutes) {
+        StaticCalibration s = edited.staticCalibration();
+        List<String> staticWhy = new ArrayList<>(s.reasoning());
+        if (staticWhy.size() >= 4) {
+            staticWhy.set(0, pointsSentence(spec, s.pointsInput()));
+            staticWhy.set(1, directionsSentence(s.directions()));
+            staticWhy.set(2, cyclesSentence(spec, s.cycles()));
+            staticWhy.set(3, settleSentence(spec, s.settleSeconds()));
+        }
+        s = new StaticCalibration(s.pointsPercentOfSpan(), s.pointsInput(), s.inputUnit(), s.directions(), s.cycles(),
+                s.settleSeconds(), s.referenceInstrument(), staticWhy, s.appliedWindow());
+        NoiseCapture n = edited.noiseCapture();
+        if (n != null) {
+            n = new NoiseCapture(n.samples(), n.sampleRateHz(), n.durationSeconds(),
+                    noiseReasoning(spec, n.sampleRateHz(), n.durationSeconds(), n.samples()));
+        }
+        FrequencySweep f = edited.frequencySweep();
+        if (f != null && !f.reasoning().isEmpty()) {
+            List<String> why = new ArrayList<>(f.reasoning());
+            why.set(0, sweepSentence(spec, f.referenceHz(), f.frequenciesHz()));
+            f = new FrequencySweep(f.referenceHz(), f.frequenciesHz(), f.amplitude(), f.amplitudeUnit(),
+                    f.referenceInstrument(), why);
+        }
+        int estimate = benchMinutes(s, n, f);
+        List<String> reasoning = new ArrayList<>(edited.reasoning().stream().filter(r -> !r.startsWith(BENCH_TIME)).toList());
+        String bench = benchSentence(s, n, f);
+        if (benchMinutes.isPresent() && benchMinutes.getAsInt() != estimate) {
+            bench = bench.substring(0, bench.length() - 1) + ": about " + estimate + " min; the engineer set "
+                    + benchMinutes.getAsInt() + " min.";
+        }
+        reasoning.add(bench);
+        return new ProcedureProposal(s, n, f, edited.acceptance(), edited.sampling(), edited.environment(),
+                edited.cautions(), benchMinutes.orElse(estimate), reasoning, edited.environmentalLimits());
+    }
+
+    /** The bench time per unit in whole minutes, rounded up (formula in {@link #restate}). */
+    static int benchMinutes(StaticCalibration statics, NoiseCapture noise, FrequencySweep sweep) {
         int seconds = SETUP_SECONDS + statics.readingsPerUnit() * (statics.settleSeconds() + SECONDS_PER_READING);
         if (noise != null) {
             seconds += (int) Math.ceil(noise.durationSeconds()) + 60;
@@ -243,12 +306,94 @@ public final class ProcedureDerivation {
         if (sweep != null) {
             seconds += sweep.frequenciesHz().size() * 20;
         }
-        reasoning.add("Bench time: 10 min set-up, " + statics.readingsPerUnit() + " static readings × ("
+        return (int) Math.ceil(seconds / 60.0);
+    }
+
+    static String benchSentence(StaticCalibration statics, NoiseCapture noise, FrequencySweep sweep) {
+        return BENCH_TIME + "10 min set-up, " + statics.readingsPerUnit() + " static readings ("
+                + statics.pointsInput().size() + " points × " + statics.directions().size()
+                + (statics.directions().size() == 1 ? " direction × " : " directions × ") + statics.cycles()
+                + (statics.cycles() == 1 ? " cycle" : " cycles") + ") × ("
                 + statics.settleSeconds() + " s settle + " + SECONDS_PER_READING + " s reading)"
                 + (noise != null ? ", noise capture " + fmt(noise.durationSeconds()) + " s + 1 min" : "")
-                + (sweep != null ? ", " + sweep.frequenciesHz().size() + " sweep points × 20 s" : "") + ".");
-        return new ProcedureProposal(statics, noise, sweep, acceptance, sampling, environment, cautions,
-                (int) Math.ceil(seconds / 60.0), reasoning, limits);
+                + (sweep != null ? ", " + sweep.frequenciesHz().size() + " sweep points × 20 s" : "") + ".";
+    }
+
+    private static final String[] NUMBER_WORDS = {"Zero", "One", "Two", "Three", "Four", "Five", "Six", "Seven",
+            "Eight", "Nine", "Ten", "Eleven", "Twelve"};
+
+    private static String count(int n) {
+        return n < NUMBER_WORDS.length ? NUMBER_WORDS[n] : String.valueOf(n);
+    }
+
+    private static List<Double> derivedPoints(SensorSpecification spec) {
+        boolean accelerometer = spec.kind() == SensorKind.ACCELEROMETER;
+        List<Double> percent = accelerometer ? ACCELEROMETER_POINTS_PERCENT : DEFAULT_POINTS_PERCENT;
+        return percent.stream().map(p -> accelerometer ? round(spec.rangeMax() * p / 100.0)
+                : round(spec.rangeMin() + spec.span() * p / 100.0)).toList();
+    }
+
+    static String pointsSentence(SensorSpecification spec, List<Double> points) {
+        if (points.equals(derivedPoints(spec))) {
+            return spec.kind() == SensorKind.ACCELEROMETER ? "Peak amplitudes of 10 … 100 % of the range at the"
+                    + " reference frequency: a piezoelectric accelerometer has no static response."
+                    : "Six points over the span, ends included.";
+        }
+        return count(points.size()) + " points set by the engineer: " + points.stream().map(ProcedureDerivation::fmt)
+                .collect(java.util.stream.Collectors.joining(", ")) + " " + spec.inputUnit() + ".";
+    }
+
+    static String directionsSentence(List<Direction> directions) {
+        return directions.size() == 2 ? "Ascending and descending, because hysteresis is specified."
+                : "Ascending only: no hysteresis is specified.";
+    }
+
+    static String cyclesSentence(SensorSpecification spec, int cycles) {
+        boolean repeatability = spec.repeatabilityPctFso() != null;
+        if (cycles == 3 && repeatability) {
+            return "Three cycles, because repeatability is specified.";
+        }
+        if (cycles == 1 && !repeatability) {
+            return "One cycle: no repeatability is specified.";
+        }
+        return count(cycles) + (cycles == 1 ? " cycle" : " cycles") + ", set by the engineer ("
+                + (repeatability ? "repeatability is specified: three cycles at least" : "no repeatability is specified")
+                + ").";
+    }
+
+    static String settleSentence(SensorSpecification spec, int seconds) {
+        String kind = spec.kind().name().toLowerCase().replace('_', ' ');
+        return seconds == spec.kind().settleSeconds() ? "Settle " + seconds + " s per point for a " + kind + "."
+                : "Settle " + seconds + " s per point, set by the engineer (" + spec.kind().settleSeconds()
+                + " s is usual for a " + kind + ").";
+    }
+
+    static List<String> noiseReasoning(SensorSpecification spec, double rate, double duration, int samples) {
+        double upper = spec.bandwidth() == null ? 0 : spec.bandwidth().upperHz();
+        double lowest = spec.bandwidth() != null && spec.bandwidth().referenceHz() != null
+                ? Math.min(1.0, spec.bandwidth().referenceHz()) : 1.0;
+        double tenPeriods = Math.max(1.0, 10.0 / lowest);
+        List<String> why = new ArrayList<>();
+        why.add(upper > 0 ? "Sample rate " + fmt(rate) + " Hz ≥ 2.5 × the specified " + fmt(upper) + " Hz."
+                : "Sample rate " + (rate == 1000.0 ? "1 kHz" : fmt(rate) + " Hz") + ": no bandwidth is specified.");
+        why.add(Math.abs(duration - tenPeriods) <= 1e-9 * tenPeriods
+                ? "Duration " + fmt(duration) + " s: ten periods of the lowest frequency of interest (" + fmt(lowest) + " Hz)."
+                : "Duration " + fmt(duration) + " s (" + samples + " samples at " + fmt(rate) + " Hz); ten periods of the"
+                + " lowest frequency of interest (" + fmt(lowest) + " Hz) take " + fmt(tenPeriods) + " s.");
+        return why;
+    }
+
+    static String sweepSentence(SensorSpecification spec, double reference, List<Double> frequencies) {
+        double limit = spec.bandwidth() == null ? 0 : spec.bandwidth().upperHz();
+        FrequencySweep derived = spec.bandwidth() == null ? null : frequencySweep(spec, List.of());
+        if (derived != null && derived.frequenciesHz().equals(frequencies)) {
+            return "From the reference frequency " + fmt(reference) + " Hz, 3 points per decade up to "
+                    + fmt(limit / 2) + " Hz, then 10 per decade up to " + fmt(limit * 2)
+                    + " Hz, beyond the limit of " + fmt(limit) + " Hz.";
+        }
+        return count(frequencies.size()) + " frequencies set by the engineer, " + fmt(frequencies.get(0)) + " … "
+                + fmt(frequencies.get(frequencies.size() - 1)) + " Hz"
+                + (limit > 0 ? ", beyond the limit of " + fmt(limit) + " Hz." : ".");
     }
 
     /**
@@ -276,13 +421,10 @@ public final class ProcedureDerivation {
         double max = inputs.stream().mapToDouble(Double::doubleValue).max().orElseThrow();
         Optional<ReferenceCandidate> ref = best(candidates, TestKind.STATIC_CALIBRATION, min, max, max);
         List<String> why = new ArrayList<>();
-        why.add(accelerometer ? "Peak amplitudes of 10 … 100 % of the range at the reference frequency: a"
-                + " piezoelectric accelerometer has no static response." : "Six points over the span, ends included.");
-        why.add(directions.size() == 2 ? "Ascending and descending, because hysteresis is specified."
-                : "Ascending only: no hysteresis is specified.");
-        why.add(cycles == 3 ? "Three cycles, because repeatability is specified." : "One cycle: no repeatability is specified.");
-        why.add("Settle " + spec.kind().settleSeconds() + " s per point for a " + spec.kind().name().toLowerCase()
-                .replace('_', ' ') + ".");
+        why.add(pointsSentence(spec, inputs));
+        why.add(directionsSentence(directions));
+        why.add(cyclesSentence(spec, cycles));
+        why.add(settleSentence(spec, spec.kind().settleSeconds()));
         why.add(ref.map(r -> "Reference " + r.identifier() + ": in calibration, calibrated over every point ("
                 + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit() + ") with the smallest uncertainty.").orElse(
                 "No reference instrument in calibration covers " + fmt(min) + " … " + fmt(max) + " " + spec.inputUnit()
@@ -302,16 +444,13 @@ public final class ProcedureDerivation {
         if (spec.noiseFloor() == null && spec.resolution() == null) {
             return null;
         }
-        List<String> why = new ArrayList<>();
         double upper = spec.bandwidth() == null ? 0 : spec.bandwidth().upperHz();
         double rate = Math.max(1000.0, niceCeil(SAMPLE_RATE_FACTOR * upper));
-        why.add(upper > 0 ? "Sample rate " + fmt(rate) + " Hz ≥ 2.5 × the specified " + fmt(upper) + " Hz."
-                : "Sample rate 1 kHz: no bandwidth is specified.");
         double lowest = spec.bandwidth() != null && spec.bandwidth().referenceHz() != null
                 ? Math.min(1.0, spec.bandwidth().referenceHz()) : 1.0;
         double duration = Math.max(1.0, 10.0 / lowest);
-        why.add("Duration " + fmt(duration) + " s: ten periods of the lowest frequency of interest (" + fmt(lowest) + " Hz).");
-        return new NoiseCapture((int) Math.ceil(rate * duration), rate, duration, why);
+        int samples = (int) Math.ceil(rate * duration);
+        return new NoiseCapture(samples, rate, duration, noiseReasoning(spec, rate, duration, samples));
     }
 
     static FrequencySweep frequencySweep(SensorSpecification spec, List<ReferenceCandidate> candidates) {

@@ -36,6 +36,7 @@ import org.dockgate.core.procedure.ProcedureProposal;
  * @param approval              who approved it and when; empty for a draft
  * @param history               the procedure's revisions, oldest first
  * @param practice              the kind's preparation items and cautions ({@link KindPractice}); null prints none
+ * @param edits                 the engineer's edits to the derived proposal in this revision, in order
  */
 public record ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
                                 String status, String partNumber, String modelName, String sensorKind,
@@ -43,9 +44,22 @@ public record ProcedureDocument(String labName, String labAddress, String proced
                                 String decisionRule, ProcedureProposal proposal,
                                 List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
                                 String author, Optional<Approval> approval, List<RevisionEntry> history,
-                                KindPractice.Practice practice) {
+                                KindPractice.Practice practice, List<EditEntry> edits) {
 
-    /** A document without kind practice (documents built before it was printed). */
+    /** A document without edits, with the kind's practice (null prints none). */
+    public ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
+                             String status, String partNumber, String modelName, String sensorKind,
+                             String specificationRevision, String aql, String inspectionLevel,
+                             String decisionRule, ProcedureProposal proposal,
+                             List<ReferenceInstrument> referenceInstruments, Optional<String> turJustification,
+                             String author, Optional<Approval> approval, List<RevisionEntry> history,
+                             KindPractice.Practice practice) {
+        this(labName, labAddress, procedureNumber, revision, status, partNumber, modelName, sensorKind,
+                specificationRevision, aql, inspectionLevel, decisionRule, proposal, referenceInstruments,
+                turJustification, author, approval, history, practice, List.of());
+    }
+
+    /** A document without kind practice and without edits (documents built before either was printed). */
     public ProcedureDocument(String labName, String labAddress, String procedureNumber, int revision,
                              String status, String partNumber, String modelName, String sensorKind,
                              String specificationRevision, String aql, String inspectionLevel,
@@ -54,7 +68,7 @@ public record ProcedureDocument(String labName, String labAddress, String proced
                              String author, Optional<Approval> approval, List<RevisionEntry> history) {
         this(labName, labAddress, procedureNumber, revision, status, partNumber, modelName, sensorKind,
                 specificationRevision, aql, inspectionLevel, decisionRule, proposal, referenceInstruments,
-                turJustification, author, approval, history, null);
+                turJustification, author, approval, history, null, List.of());
     }
 
     /**
@@ -88,6 +102,7 @@ public record ProcedureDocument(String labName, String labAddress, String proced
         }
         referenceInstruments = referenceInstruments == null ? List.of() : List.copyOf(referenceInstruments);
         history = history == null ? List.of() : List.copyOf(history);
+        edits = edits == null ? List.of() : List.copyOf(edits);
         turJustification = Objects.requireNonNullElse(turJustification, Optional.<String>empty())
                 .filter(text -> !text.isBlank());
         approval = Objects.requireNonNullElse(approval, Optional.empty());
@@ -155,6 +170,26 @@ public record ProcedureDocument(String labName, String labAddress, String proced
                         "A revision history line needs its revision number, status, date and who.");
             }
             reason = reason == null ? "" : reason;
+        }
+    }
+
+    /**
+     * One edit of a proposed value, as recorded with its reason.
+     *
+     * @param field    the edited value's key, e.g. "static.cycles"
+     * @param oldValue the value before, or "derived" when the derived value was replaced
+     * @param newValue the value after
+     * @param reason   why
+     * @param who      who edited it
+     * @param at       when (printed in UTC)
+     */
+    public record EditEntry(String field, String oldValue, String newValue, String reason, String who, Instant at) {
+        /** @throws IllegalArgumentException when a part is missing */
+        public EditEntry {
+            if (field == null || newValue == null || reason == null || who == null || at == null) {
+                throw new IllegalArgumentException("An edit needs its field, new value, reason, who and when.");
+            }
+            oldValue = oldValue == null ? "derived" : oldValue;
         }
     }
 

@@ -496,6 +496,7 @@ public class ProcedurePdf {
             section("8 Revision history");
             if (doc.history().isEmpty()) {
                 put("First revision; no history yet.", body, 0, 0);
+                edits();
                 return;
             }
             PdfPTable table = table(new float[] {8, 16, 16, 20, 40}, "Rev", "Status", "Date", "By", "Reason");
@@ -505,6 +506,24 @@ public class ProcedurePdf {
                 cell(table, DATE.format(entry.at()), body);
                 cell(table, entry.who(), body);
                 cell(table, entry.reason(), body);
+            }
+            pdf.add(table);
+            edits();
+        }
+
+        /** The engineer's edits to the derived proposal: what changed, why, by whom and when. */
+        private void edits() throws DocumentException {
+            subsection("Edits to the derived proposal in this revision");
+            if (doc.edits().isEmpty()) {
+                put("None: the procedure is as derived from the specification.", body, 0, 0);
+                return;
+            }
+            PdfPTable table = table(new float[] {18, 22, 30, 30}, "Value", "Old → new", "Reason", "By, when");
+            for (ProcedureDocument.EditEntry e : doc.edits()) {
+                cell(table, e.field(), body);
+                cell(table, e.oldValue() + " → " + e.newValue(), body);
+                cell(table, e.reason(), body);
+                cell(table, e.who() + ", " + DATE_TIME.format(e.at()), body);
             }
             pdf.add(table);
         }

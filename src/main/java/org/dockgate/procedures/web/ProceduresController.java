@@ -133,6 +133,7 @@ class ProceduresController {
         page.addAttribute("spec", spec);
         page.addAttribute("practice", practice(spec));
         page.addAttribute("history", procedures.revisions(revision.modelId()));
+        page.addAttribute("edits", procedures.edits(revision));
         return "procedures/revision";
     }
 

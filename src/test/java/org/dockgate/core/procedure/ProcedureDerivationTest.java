@@ -50,6 +50,39 @@ class ProcedureDerivationTest {
     }
 
     @Test
+    void restatingRecomputesTheTextsThatDependOnEditedValuesAndNothingElse() {
+        var spec = new SensorSpecification(SensorKind.ACCELEROMETER, "g", -50, 50, "mV",
+                new Sensitivity(100, "mV/g", 5, ToleranceMode.PERCENT), null, null, null, null, null, null,
+                new NoiseFloor(0.0005, "g", Referred.INPUT), null, new Bandwidth(5000.0, null, null, 100.0), null);
+        var derived = ProcedureDerivation.derive(spec, OPTIONS, List.of());
+        // The derivation and the restatement share their sentences: an unedited proposal restates to itself.
+        assertThat(ProcedureDerivation.restate(derived, spec, java.util.OptionalInt.empty())).isEqualTo(derived);
+
+        var n = derived.noiseCapture();
+        var s = derived.staticCalibration();
+        var f = derived.frequencySweep();
+        // twice the samples at the same rate: twice the duration
+        var noise = new ProcedureProposal.NoiseCapture(2 * n.samples(), n.sampleRateHz(), 2 * n.samples() / n.sampleRateHz(),
+                n.reasoning());
+        var sweep = new ProcedureProposal.FrequencySweep(f.referenceHz(), List.of(100.0, 1000.0, 5000.0, 10000.0),
+                f.amplitude(), f.amplitudeUnit(), f.referenceInstrument(), f.reasoning());
+        var edited = new ProcedureProposal(s, noise, sweep, derived.acceptance(), derived.sampling(), derived.environment(),
+                derived.cautions(), derived.estimatedBenchMinutes(), derived.reasoning(), derived.environmentalLimits());
+        var restated = ProcedureDerivation.restate(edited, spec, java.util.OptionalInt.empty());
+        assertThat(restated.noiseCapture().reasoning().get(1)).startsWith("Duration " + ProcedureDerivation.fmt(
+                noise.durationSeconds()) + " s (" + noise.samples() + " samples");
+        assertThat(restated.frequencySweep().reasoning().get(0))
+                .isEqualTo("Four frequencies set by the engineer, 100 … 10000 Hz, beyond the limit of 5000 Hz.");
+        // 10 min set-up + readings × (settle + 15 s) + (noise duration + 60 s) + 20 s per sweep point, rounded up
+        int seconds = 600 + s.readingsPerUnit() * (s.settleSeconds() + 15) + (int) Math.ceil(noise.durationSeconds()) + 60
+                + 4 * 20;
+        assertThat(restated.estimatedBenchMinutes()).isEqualTo((int) Math.ceil(seconds / 60.0));
+        assertThat(restated.reasoning()).filteredOn(r -> r.startsWith("Bench time: ")).singleElement()
+                .satisfies(r -> assertThat(r).contains("4 sweep points × 20 s"));
+        assertThat(restated.acceptance()).isEqualTo(derived.acceptance());
+    }
+
+    @Test
     void aFivekHzBandwidthGetsAFastEnoughSampleRateAndSweepPointsBeyondIt() {
         var spec = new SensorSpecification(SensorKind.ACCELEROMETER, "g", -50, 50, "mV",
                 new Sensitivity(100, "mV/g", 5, ToleranceMode.PERCENT), null, null, null, null, null, null,
