@@ -6,18 +6,14 @@ import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
-import java.util.NoSuchElementException;
 import java.util.Optional;
 import java.util.OptionalInt;
 import java.util.function.Consumer;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import org.apache.commons.csv.CSVException;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.dockgate.core.quantity.Units;
 import org.dockgate.core.series.Direction;
@@ -142,78 +138,53 @@ public final class AcquisitionCsv {
     }
 
     private AcquisitionReport run(CountingReader input, ProgressListener progress, int progressEvery) {
-        long rows = 0;
-        long accepted = 0;
-        long line = 1;
-        try (CSVParser parser = CSVParser.parse(input, FORMAT)) {
-            Iterator<CSVRecord> records = parser.iterator();
-            boolean headerSeen = false;
-            while (true) {
-                line = parser.getCurrentLineNumber() + 1;
-                CSVRecord record;
-                try {
-                    record = records.next();
-                } catch (NoSuchElementException end) {
-                    break;
-                }
-                if (isBlank(record)) {
-                    continue;
-                }
-                if (!headerSeen) {
-                    Optional<String> problem = headerProblem(record);
-                    if (problem.isPresent()) {
-                        error(line, null, problem.get());
-                        return report(rows, accepted, progress, input);
-                    }
-                    headerSeen = true;
-                    continue;
-                }
-                rows++;
-                AcquiredReading reading = row(line, record);
+        long[] rows = {0};
+        long[] accepted = {0};
+        CsvWalk.walk(input, FORMAT, new CsvWalk.Visitor() {
+            @Override
+            public boolean header(long line, CSVRecord record) {
+                Optional<String> problem = headerProblem(record);
+                problem.ifPresent(p -> error(line, null, p));
+                return problem.isEmpty();
+            }
+
+            @Override
+            public boolean row(long line, CSVRecord record) {
+                rows[0]++;
+                AcquiredReading reading = AcquisitionCsv.this.row(line, record);
                 if (reading != null) {
                     try {
                         consumer.accept(reading);
-                        accepted++;
+                        accepted[0]++;
                     } catch (RefusedReading refused) {
                         error(line, refused.column().orElse(null), refused.getMessage());
                     } catch (IllegalArgumentException refused) {
                         refusal(line, refused.getMessage());
                     }
                 }
-                if (rows % progressEvery == 0) {
-                    progress.progress(rows, input.count);
+                if (rows[0] % progressEvery == 0) {
+                    progress.progress(rows[0], input.count);
                 }
+                return true;
             }
-            if (!headerSeen) {
+
+            @Override
+            public void malformed(long line, String problem) {
+                error(line, null, "the CSV is malformed here (" + problem
+                        + "); a quoted field may be missing its closing quote. Nothing after this line was read");
+            }
+
+            @Override
+            public void empty() {
                 error(1, null, "the file is empty: it must start with the header row '" + HEADER + "'");
             }
-        } catch (UncheckedIOException e) {
-            if (!(e.getCause() instanceof CSVException)) {
-                throw e;
-            }
-            error(line, null, "the CSV is malformed here (" + e.getCause().getMessage()
-                    + "); a quoted field may be missing its closing quote. Nothing after this line was read");
-        } catch (IOException e) {
-            if (!(e instanceof CSVException)) {
-                throw new UncheckedIOException(e);
-            }
-            error(line, null, "the CSV is malformed here (" + e.getMessage() + ")");
-        }
-        return report(rows, accepted, progress, input);
+        });
+        return report(rows[0], accepted[0], progress, input);
     }
 
     private AcquisitionReport report(long rows, long accepted, ProgressListener progress, CountingReader input) {
         progress.progress(rows, input.count);
         return new AcquisitionReport(rows, accepted, errors, errorsNotListed);
-    }
-
-    private static boolean isBlank(CSVRecord record) {
-        for (String field : record) {
-            if (!field.isBlank()) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private Optional<String> headerProblem(CSVRecord record) {

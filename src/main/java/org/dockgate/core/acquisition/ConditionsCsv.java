@@ -1,19 +1,14 @@
 package org.dockgate.core.acquisition;
 
-import java.io.IOException;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.Iterator;
 import java.util.List;
 import java.util.Map;
-import java.util.NoSuchElementException;
 import java.util.Optional;
 import java.util.OptionalDouble;
-import org.apache.commons.csv.CSVException;
 import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 
 /**
@@ -96,40 +91,29 @@ public final class ConditionsCsv {
         List<ConditionsRow> rows = new ArrayList<>();
         List<RowError> errors = new ArrayList<>();
         Map<String, Long> seen = new HashMap<>();
-        long line = 1;
-        long read = 0;
-        try (CSVParser parser = CSVParser.parse(reader, FORMAT)) {
-            Iterator<CSVRecord> records = parser.iterator();
-            boolean headerSeen = false;
-            while (true) {
-                line = parser.getCurrentLineNumber() + 1;
-                CSVRecord record;
-                try {
-                    record = records.next();
-                } catch (NoSuchElementException end) {
-                    break;
+        long[] read = {0};
+        CsvWalk.walk(reader, FORMAT, new CsvWalk.Visitor() {
+            @Override
+            public boolean header(long line, CSVRecord record) {
+                List<String> names = new ArrayList<>();
+                record.forEach(f -> names.add(f.strip()));
+                names.set(0, names.get(0).startsWith("\uFEFF") ? names.get(0).substring(1).strip() : names.get(0));
+                if (!names.equals(COLUMNS)) {
+                    errors.add(new RowError(line, Optional.empty(), "the header row must be exactly '" + HEADER
+                            + "', found '" + String.join(",", names) + "'"));
+                    return false;
                 }
-                if (blank(record)) {
-                    continue;
-                }
-                if (!headerSeen) {
-                    List<String> names = new ArrayList<>();
-                    record.forEach(f -> names.add(f.strip()));
-                    names.set(0, names.get(0).startsWith("\uFEFF") ? names.get(0).substring(1).strip() : names.get(0));
-                    if (!names.equals(COLUMNS)) {
-                        errors.add(new RowError(line, Optional.empty(), "the header row must be exactly '" + HEADER
-                                + "', found '" + String.join(",", names) + "'"));
-                        return new Report(0, List.of(), errors);
-                    }
-                    headerSeen = true;
-                    continue;
-                }
-                if (++read > MAX_ROWS) {
+                return true;
+            }
+
+            @Override
+            public boolean row(long line, CSVRecord record) {
+                if (++read[0] > MAX_ROWS) {
                     errors.add(new RowError(line, Optional.empty(), "more than " + MAX_ROWS + " lines; a conditions file"
                             + " has one line per sampled unit"));
-                    break;
+                    return false;
                 }
-                ConditionsRow row = row(line, record, errors);
+                ConditionsRow row = ConditionsCsv.row(line, record, errors);
                 if (row != null) {
                     Long first = seen.putIfAbsent(row.serial(), line);
                     if (first != null) {
@@ -139,24 +123,22 @@ public final class ConditionsCsv {
                         rows.add(row);
                     }
                 }
+                return true;
             }
-            if (!headerSeen) {
+
+            @Override
+            public void malformed(long line, String problem) {
+                errors.add(new RowError(line, Optional.empty(), "the CSV is malformed here (" + problem
+                        + "); nothing after this line was read"));
+            }
+
+            @Override
+            public void empty() {
                 errors.add(new RowError(1, Optional.empty(), "the file is empty: it must start with the header row '"
                         + HEADER + "'"));
             }
-        } catch (UncheckedIOException e) {
-            if (!(e.getCause() instanceof CSVException)) {
-                throw e;
-            }
-            errors.add(new RowError(line, Optional.empty(), "the CSV is malformed here (" + e.getCause().getMessage()
-                    + "); nothing after this line was read"));
-        } catch (IOException e) {
-            if (!(e instanceof CSVException)) {
-                throw new UncheckedIOException(e);
-            }
-            errors.add(new RowError(line, Optional.empty(), "the CSV is malformed here (" + e.getMessage() + ")"));
-        }
-        return new Report(read, rows, errors);
+        });
+        return new Report(read[0], rows, errors);
     }
 
     private static ConditionsRow row(long line, CSVRecord record, List<RowError> errors) {
@@ -214,14 +196,5 @@ public final class ConditionsCsv {
             return Double.NaN;
         }
         return v;
-    }
-
-    private static boolean blank(CSVRecord record) {
-        for (String field : record) {
-            if (!field.isBlank()) {
-                return false;
-            }
-        }
-        return true;
     }
 }
